@@ -1,0 +1,3 @@
+import { packageName as specName } from '@binsupport/spec';
+export const packageName = '@binsupport/design';
+export const uses = [specName];

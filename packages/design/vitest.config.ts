@@ -1,0 +1,3 @@
+import { projectTestConfig } from '../../vitest.shared.js';
+
+export default projectTestConfig();
