@@ -1,0 +1,63 @@
+/** A circular bin: a cylinder on a conical hopper with a concentric outlet (SI units). */
+export interface CircularBin {
+  /** Internal diameter of the cylinder d_c, m. */
+  diameter: number;
+  /** Height of the vertical wall above the transition, m. */
+  cylinderHeight: number;
+  /** Height of the level solid surface above the transition, m. */
+  fillHeight: number;
+  wallThickness: number;
+  hopper: {
+    /** Apex half-angle beta, measured from the vertical, rad. */
+    apexHalfAngle: number;
+    outletDiameter: number;
+    thickness: number;
+  };
+  /** Density of the plates, kg/m3. */
+  steelDensity: number;
+}
+
+export interface CircularBinGeometry {
+  radius: number;
+  outletRadius: number;
+  /** Vertical height of the hopper from the outlet to the transition, m. */
+  hopperHeight: number;
+  /** Slant length of the hopper wall, m. */
+  hopperSlant: number;
+  planArea: number;
+  perimeter: number;
+  /** A/U = d_c / 4 for a circle (EN 1991-4 5.2.1.1). */
+  hydraulicRadius: number;
+  /** Volume of the solid in the cylinder and in the hopper (frustum), m3. */
+  cylinderVolume: number;
+  hopperVolume: number;
+  /** Mid-surface plate areas, m2. */
+  wallPlateArea: number;
+  hopperPlateArea: number;
+}
+
+export function circularBinGeometry(bin: CircularBin): CircularBinGeometry {
+  const radius = bin.diameter / 2;
+  const outletRadius = bin.hopper.outletDiameter / 2;
+  const beta = bin.hopper.apexHalfAngle;
+  const hopperHeight = (radius - outletRadius) / Math.tan(beta);
+  const hopperSlant = (radius - outletRadius) / Math.sin(beta);
+  const planArea = Math.PI * radius * radius;
+  const perimeter = 2 * Math.PI * radius;
+  const wallMidRadius = radius + bin.wallThickness / 2;
+  return {
+    radius,
+    outletRadius,
+    hopperHeight,
+    hopperSlant,
+    planArea,
+    perimeter,
+    hydraulicRadius: planArea / perimeter,
+    cylinderVolume: planArea * bin.fillHeight,
+    // Frustum of a cone: (pi h / 3)(R^2 + R r + r^2).
+    hopperVolume: (Math.PI * hopperHeight / 3) * (radius * radius + radius * outletRadius + outletRadius * outletRadius),
+    wallPlateArea: 2 * Math.PI * wallMidRadius * bin.cylinderHeight,
+    // Lateral area of the frustum at mid-surface: pi (R + r) s.
+    hopperPlateArea: Math.PI * (radius + outletRadius) * hopperSlant,
+  };
+}

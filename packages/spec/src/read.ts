@@ -1,0 +1,51 @@
+import { readFile, stat } from 'node:fs/promises';
+import { extname } from 'node:path';
+import { parse as parseYaml, YAMLParseError } from 'yaml';
+import { SpecError } from './errors.js';
+import { normaliseSpec, type BinSpec } from './spec.js';
+
+/** Largest spec file read, bytes: a spec sheet is a few kB; anything larger is not a spec. */
+export const MAX_SPEC_BYTES = 1_000_000;
+
+export type SpecFormat = 'yaml' | 'json';
+
+export function specFormatOf(path: string): SpecFormat {
+  const extension = extname(path).toLowerCase();
+  if (extension === '.yaml' || extension === '.yml') return 'yaml';
+  if (extension === '.json') return 'json';
+  throw new SpecError('UNSUPPORTED_FORMAT', [{ path, message: `${path}: a spec must be a .yaml, .yml or .json file; got '${extension || 'no extension'}'` }]);
+}
+
+/** Parse spec text of a known format into a plain document (no validation yet). */
+export function parseSpecText(textContent: string, format: SpecFormat, source = 'spec'): unknown {
+  if (format === 'json') {
+    try {
+      return JSON.parse(textContent) as unknown;
+    } catch (error) {
+      throw new SpecError('PARSE_ERROR', [{ path: source, message: `${source} is not valid JSON: ${(error as Error).message}` }]);
+    }
+  }
+  try {
+    // Plain YAML 1.2 core schema: no custom tags, no merge keys, a bounded alias count.
+    return parseYaml(textContent, { schema: 'core', merge: false, maxAliasCount: 100, uniqueKeys: true }) as unknown;
+  } catch (error) {
+    const detail = error instanceof YAMLParseError ? error.message.split('\n')[0] : (error as Error).message;
+    throw new SpecError('PARSE_ERROR', [{ path: source, message: `${source} is not valid YAML: ${detail}` }]);
+  }
+}
+
+/** Read, parse, validate and convert a spec file. */
+export async function readSpecFile(path: string): Promise<BinSpec> {
+  const format = specFormatOf(path);
+  let size: number;
+  try {
+    size = (await stat(path)).size;
+  } catch {
+    throw new SpecError('UNREADABLE_FILE', [{ path, message: `${path}: the spec file cannot be read (does it exist?)` }]);
+  }
+  if (size > MAX_SPEC_BYTES) {
+    throw new SpecError('UNREADABLE_FILE', [{ path, message: `${path}: a spec file must be at most ${MAX_SPEC_BYTES} bytes; got ${size}` }]);
+  }
+  const content = await readFile(path, 'utf8');
+  return normaliseSpec(parseSpecText(content, format, path));
+}

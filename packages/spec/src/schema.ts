@@ -1,0 +1,119 @@
+import { z } from 'zod';
+
+// The user-facing input schema, in the documented input units (docs/input-reference.md):
+// lengths of the bin in m, plate thicknesses in mm, angles in degrees, unit weights in kN/m3.
+// Every numeric field states its range and unit, so an error can name all three.
+
+interface Quantity {
+  min: number;
+  max: number;
+  unit: string;
+  /** Whether the bounds are exclusive. */
+  exclusive?: boolean;
+}
+
+function rangeText({ min, max, unit, exclusive }: Quantity): string {
+  const unitText = unit === '' ? '' : ` ${unit}`;
+  return exclusive ? `greater than ${min} and less than ${max}${unitText}` : `between ${min} and ${max}${unitText}`;
+}
+
+/** A finite number within a documented range; the message names the range and the unit. */
+function quantity(range: Quantity) {
+  const expected = `must be a number ${rangeText(range)}`;
+  const base = z.number({ error: (issue) => (issue.input === undefined ? `is required (a number ${rangeText(range)})` : expected) });
+  return range.exclusive
+    ? base.gt(range.min, { error: expected }).lt(range.max, { error: expected })
+    : base.gte(range.min, { error: expected }).lte(range.max, { error: expected });
+}
+
+function wholeNumber(min: number, max: number, what: string) {
+  const expected = `must be a whole number of ${what} between ${min} and ${max}`;
+  return z
+    .number({ error: (issue) => (issue.input === undefined ? `is required (${expected.replace('must be ', '')})` : expected) })
+    .int({ error: expected })
+    .gte(min, { error: expected })
+    .lte(max, { error: expected });
+}
+
+function text(maxLength: number) {
+  return z.string({ error: 'must be text' }).max(maxLength, { error: `must be at most ${maxLength} characters` });
+}
+
+function choice<const T extends readonly [string, ...string[]]>(values: T) {
+  return z.enum(values, { error: `must be one of ${values.join(', ')}` });
+}
+
+export const steelGrades = ['S235', 'S275', 'S355', 'S460'] as const;
+export const sectionFamilies = ['IPE', 'HEB'] as const;
+export const wallSurfaceCategories = ['D1', 'D2', 'D3'] as const;
+
+export const binSpecInput = z.strictObject(
+  {
+    schemaVersion: z.literal(1, { error: 'must be 1 (the only input format so far)' }).default(1),
+    project: z.strictObject(
+      {
+        name: text(200).min(1, { error: 'must not be empty' }),
+        client: text(200).default(''),
+        site: text(200).default(''),
+        reference: text(100).default(''),
+        designer: text(100).default(''),
+        date: text(40).default(''),
+      },
+      { error: 'must be a table of project fields' },
+    ),
+    bin: z.strictObject(
+      {
+        shape: choice(['circular']).default('circular'),
+        diameter: quantity({ min: 1, max: 60, unit: 'm' }),
+        cylinderHeight: quantity({ min: 0.5, max: 100, unit: 'm' }),
+        fillHeight: quantity({ min: 0.1, max: 100, unit: 'm' }).optional(),
+        wallThickness: quantity({ min: 2, max: 60, unit: 'mm' }),
+        hopper: z.strictObject(
+          {
+            apexHalfAngle: quantity({ min: 5, max: 60, unit: 'degrees' }),
+            outletDiameter: quantity({ min: 0.05, max: 20, unit: 'm' }),
+            thickness: quantity({ min: 2, max: 60, unit: 'mm' }),
+          },
+          { error: 'must be a table with apexHalfAngle, outletDiameter and thickness' },
+        ),
+      },
+      { error: 'must be a table describing the bin' },
+    ),
+    solid: z.strictObject(
+      {
+        name: text(60).min(1, { error: 'must name a built-in solid' }),
+        wallSurface: choice(wallSurfaceCategories).default('D2'),
+        unitWeight: quantity({ min: 1, max: 30, unit: 'kN/m3' }).optional(),
+        wallFrictionCoefficient: quantity({ min: 0.05, max: 1.2, unit: '' }).optional(),
+        lateralPressureRatio: quantity({ min: 0.1, max: 0.99, unit: '' }).optional(),
+      },
+      { error: 'must be a table naming the stored solid' },
+    ),
+    support: z.strictObject(
+      {
+        type: choice(['ring-on-columns']).default('ring-on-columns'),
+        columns: wholeNumber(3, 36, 'columns'),
+        girderDiameter: quantity({ min: 1, max: 62, unit: 'm' }).optional(),
+        segmentsPerSpan: wholeNumber(2, 120, 'segments').default(12),
+        grade: choice(steelGrades).default('S355'),
+        sectionFamilies: z.array(choice(sectionFamilies), { error: 'must be a list of section families' }).min(1, { error: 'must name at least one section family' }).default(['IPE', 'HEB']),
+      },
+      { error: 'must be a table describing the support' },
+    ),
+    actions: z
+      .strictObject(
+        {
+          permanentFactor: quantity({ min: 1, max: 2, unit: '' }).default(1.35),
+          solidFactor: quantity({ min: 1, max: 2, unit: '' }).default(1.5),
+        },
+        { error: 'must be a table of partial factors' },
+      )
+      .default({ permanentFactor: 1.35, solidFactor: 1.5 }),
+  },
+  { error: 'must be a table with project, bin, solid and support' },
+);
+
+/** The spec exactly as the user may write it (input units). */
+export type BinSpecInput = z.input<typeof binSpecInput>;
+/** The spec after validation and defaults, still in input units. */
+export type BinSpecParsed = z.output<typeof binSpecInput>;

@@ -1,0 +1,104 @@
+import { describe, expect, it } from 'vitest';
+import { parseSpecText } from './read.js';
+import { normaliseSpec } from './spec.js';
+import { SpecError } from './errors.js';
+
+const minimal = {
+  project: { name: 'Test bin (invented)' },
+  bin: { diameter: 6, cylinderHeight: 12, wallThickness: 6, hopper: { apexHalfAngle: 30, outletDiameter: 0.4, thickness: 8 } },
+  solid: { name: 'wheat' },
+  support: { columns: 8 },
+};
+
+function errorOf(document: unknown): SpecError {
+  try {
+    normaliseSpec(document);
+  } catch (error) {
+    if (error instanceof SpecError) return error;
+    throw error;
+  }
+  throw new Error('expected a SpecError');
+}
+
+function withBin(patch: Record<string, unknown>) {
+  return { ...minimal, bin: { ...minimal.bin, ...patch } };
+}
+
+describe('normaliseSpec', () => {
+  it('converts input units to SI and fills defaults', () => {
+    const spec = normaliseSpec(minimal);
+    expect(spec.bin.wallThickness).toBeCloseTo(0.006, 12);
+    expect(spec.bin.hopper.apexHalfAngle).toBeCloseTo(Math.PI / 6, 12);
+    expect(spec.bin.fillHeight).toBe(12);
+    expect(spec.support.girderDiameter).toBeCloseTo(6.006, 12);
+    expect(spec.support.grade).toBe('S355');
+    expect(spec.support.segmentsPerSpan).toBe(12);
+    expect(spec.actions).toEqual({ permanentFactor: 1.35, solidFactor: 1.5 });
+  });
+
+  it('takes wheat from EN 1991-4 Table E.1 (upper unit weight 9.0 kN/m3, K_m 0.54, mu_m D2 0.38)', () => {
+    // EN 1991-4:2006 Annex E, Table E.1, row 'wheat'.
+    const { solid } = normaliseSpec(minimal);
+    expect(solid.unitWeight).toBeCloseTo(9000, 9);
+    expect(solid.unitWeightLower).toBeCloseTo(7500, 9);
+    expect(solid.lateralPressureRatio).toBe(0.54);
+    expect(solid.lateralPressureRatioFactor).toBe(1.11);
+    expect(solid.wallFrictionCoefficient).toBe(0.38);
+    expect(solid.wallFrictionFactor).toBe(1.16);
+    expect(solid.sources.unitWeight).toContain('Table E.1');
+  });
+
+  it('applies user overrides and records them as user input', () => {
+    const spec = normaliseSpec({ ...minimal, solid: { name: 'wheat', wallSurface: 'D3', unitWeight: 8.5, lateralPressureRatio: 0.6 } });
+    expect(spec.solid.unitWeight).toBeCloseTo(8500, 9);
+    expect(spec.solid.lateralPressureRatio).toBe(0.6);
+    expect(spec.solid.wallFrictionCoefficient).toBe(0.57);
+    expect(spec.solid.sources.unitWeight).toMatch(/user input/);
+  });
+
+  it('names the field, the range and the unit of an out-of-range input', () => {
+    const error = errorOf(withBin({ hopper: { apexHalfAngle: 75, outletDiameter: 0.4, thickness: 8 } }));
+    expect(error.code).toBe('INVALID_INPUT');
+    expect(error.path).toBe('bin.hopper.apexHalfAngle');
+    expect(error.message).toBe('bin.hopper.apexHalfAngle must be a number between 5 and 60 degrees; got 75');
+  });
+
+  it('rejects text where a number belongs, NaN, and missing required fields', () => {
+    expect(errorOf(withBin({ diameter: '6 m' })).message).toBe("bin.diameter must be a number between 1 and 60 m; got '6 m'");
+    expect(errorOf(withBin({ diameter: Number.NaN })).path).toBe('bin.diameter');
+    const missing = errorOf({ ...minimal, bin: { ...minimal.bin, cylinderHeight: undefined } });
+    expect(missing.message).toBe('bin.cylinderHeight is required (a number between 0.5 and 100 m)');
+  });
+
+  it('rejects unknown keys by name, so a misspelt input is never ignored', () => {
+    const error = errorOf(withBin({ diamter: 6 }));
+    expect(error.path).toBe('bin.diamter');
+    expect(error.message).toMatch(/bin.diamter is not an input/);
+  });
+
+  it('checks fields against each other', () => {
+    expect(errorOf(withBin({ fillHeight: 13 })).path).toBe('bin.fillHeight');
+    expect(errorOf(withBin({ hopper: { apexHalfAngle: 30, outletDiameter: 5.8, thickness: 8 } })).path).toBe('bin.hopper.outletDiameter');
+    // EN 1991-4 1.1.2(3) scope: h_b / d_c < 10 (from memory).
+    expect(errorOf(withBin({ diameter: 2, cylinderHeight: 40 })).message).toMatch(/h_b\/d_c below 10/);
+  });
+
+  it('rejects an unknown solid, naming the built-in ones', () => {
+    const error = errorOf({ ...minimal, solid: { name: 'gravel' } });
+    expect(error.code).toBe('UNKNOWN_SOLID');
+    expect(error.message).toMatch(/solid.name must be one of the built-in solids \(wheat, maize/);
+  });
+});
+
+describe('parseSpecText', () => {
+  it('reads YAML and JSON to the same document', () => {
+    const yaml = 'project:\n  name: Test\nsupport:\n  columns: 8\n';
+    expect(parseSpecText(yaml, 'yaml')).toEqual(parseSpecText(JSON.stringify({ project: { name: 'Test' }, support: { columns: 8 } }), 'json'));
+  });
+
+  it('reports malformed YAML and JSON with the source name', () => {
+    expect(() => parseSpecText('project: [unclosed', 'yaml', 'a.yaml')).toThrowError(/a.yaml is not valid YAML/);
+    expect(() => parseSpecText('{"project": ', 'json', 'a.json')).toThrowError(/a.json is not valid JSON/);
+    expect(() => parseSpecText('a: 1\na: 2\n', 'yaml', 'dup.yaml')).toThrowError(/dup.yaml is not valid YAML/);
+  });
+});

@@ -1,0 +1,134 @@
+import type { z } from 'zod';
+import { SpecError, type SpecIssue } from './errors.js';
+import { binSpecInput, type BinSpecParsed } from './schema.js';
+import { resolveStoredSolid, type StoredSolid } from './solids.js';
+import { degToRad, knPerM3ToNPerM3, mmToM } from './units.js';
+
+export const STEEL_DENSITY = 7850; // kg/m3, EN 1991-1-1 Table A.4 (steel)
+
+/** The validated bin specification in SI base units: what every later stage reads. */
+export interface BinSpec {
+  schemaVersion: 1;
+  project: { name: string; client: string; site: string; reference: string; designer: string; date: string };
+  bin: {
+    shape: 'circular';
+    /** Internal diameter of the cylinder d_c, m. */
+    diameter: number;
+    /** Height of the vertical wall from the transition to its top, m. */
+    cylinderHeight: number;
+    /** Height of the level solid surface above the transition, m. */
+    fillHeight: number;
+    wallThickness: number;
+    hopper: { apexHalfAngle: number; outletDiameter: number; thickness: number };
+    steelDensity: number;
+  };
+  solid: StoredSolid;
+  support: {
+    type: 'ring-on-columns';
+    columns: number;
+    /** Diameter of the girder's centroid line, m (default: the centre line of the cylinder wall). */
+    girderDiameter: number;
+    segmentsPerSpan: number;
+    grade: 'S235' | 'S275' | 'S355' | 'S460';
+    sectionFamilies: Array<'IPE' | 'HEB'>;
+  };
+  actions: { permanentFactor: number; solidFactor: number };
+}
+
+function issuePath(path: ReadonlyArray<PropertyKey>): string {
+  return path.map((part) => (typeof part === 'number' ? `[${part}]` : String(part))).join('.').replace(/\.\[/g, '[');
+}
+
+function describeInput(input: unknown): string {
+  if (input === undefined) return 'nothing';
+  if (typeof input === 'string') return `'${input.length > 40 ? `${input.slice(0, 40)}…` : input}'`;
+  if (typeof input === 'number') return String(input);
+  if (Array.isArray(input)) return 'a list';
+  if (input === null) return 'null';
+  return typeof input === 'object' ? 'a table' : String(input);
+}
+
+function zodIssues(error: z.ZodError): SpecIssue[] {
+  return error.issues.map((issue) => {
+    if (issue.code === 'unrecognized_keys') {
+      const where = issuePath(issue.path);
+      const keys = issue.keys.map((key) => (where ? `${where}.${key}` : key));
+      return { path: keys[0] ?? where, message: `${keys.join(', ')} ${keys.length > 1 ? 'are not inputs' : 'is not an input'} of this spec (check the spelling against docs/input-reference.md)` };
+    }
+    const path = issuePath(issue.path) || '(spec)';
+    const got = 'input' in issue && issue.code !== 'invalid_type' ? `; got ${describeInput(issue.input)}` : issue.code === 'invalid_type' && 'input' in issue && issue.input !== undefined ? `; got ${describeInput(issue.input)}` : '';
+    return { path, message: `${path} ${issue.message}${got}` };
+  });
+}
+
+function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
+  const issues: SpecIssue[] = [];
+  const { bin } = parsed;
+  if (bin.fillHeight !== undefined && bin.fillHeight > bin.cylinderHeight) {
+    issues.push({ path: 'bin.fillHeight', message: `bin.fillHeight must be between 0.1 m and bin.cylinderHeight (${bin.cylinderHeight} m); got ${bin.fillHeight}` });
+  }
+  if (bin.hopper.outletDiameter >= 0.9 * bin.diameter) {
+    issues.push({ path: 'bin.hopper.outletDiameter', message: `bin.hopper.outletDiameter must be less than 0.9 times bin.diameter (${(0.9 * bin.diameter).toFixed(3)} m); got ${bin.hopper.outletDiameter}` });
+  }
+  const hopperHeight = (bin.diameter - bin.hopper.outletDiameter) / 2 / Math.tan(degToRad(bin.hopper.apexHalfAngle));
+  const totalHeight = bin.cylinderHeight + hopperHeight;
+  // EN 1991-4:2006 1.1.2(3): h_b / d_c < 10 and h_b < 100 m (scope of the standard; from memory).
+  if (totalHeight / bin.diameter >= 10) {
+    issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m, h_b/d_c = ${(totalHeight / bin.diameter).toFixed(2)}; EN 1991-4 covers h_b/d_c below 10` });
+  }
+  if (totalHeight >= 100) {
+    issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m; EN 1991-4 covers h_b below 100 m` });
+  }
+  const wallCentreDiameter = bin.diameter + bin.wallThickness / 1000;
+  const girderDiameter = parsed.support.girderDiameter ?? wallCentreDiameter;
+  if (Math.abs(girderDiameter - wallCentreDiameter) > 0.5) {
+    issues.push({ path: 'support.girderDiameter', message: `support.girderDiameter must be within 0.5 m of the wall centre line (${wallCentreDiameter.toFixed(3)} m) for a girder under the shell; got ${girderDiameter}` });
+  }
+  return issues;
+}
+
+/** Validate a parsed document (from YAML, JSON or a workbook) and convert it to SI: the BinSpec. */
+export function normaliseSpec(document: unknown): BinSpec {
+  const parsed = binSpecInput.safeParse(document, { reportInput: true });
+  if (!parsed.success) {
+    throw new SpecError('INVALID_INPUT', zodIssues(parsed.error));
+  }
+  const input = parsed.data;
+  const cross = crossFieldIssues(input);
+  if (cross.length > 0) {
+    throw new SpecError('INVALID_INPUT', cross);
+  }
+  const solid = resolveStoredSolid(input.solid.name, input.solid.wallSurface, {
+    unitWeight: input.solid.unitWeight === undefined ? undefined : knPerM3ToNPerM3(input.solid.unitWeight),
+    wallFrictionCoefficient: input.solid.wallFrictionCoefficient,
+    lateralPressureRatio: input.solid.lateralPressureRatio,
+  });
+  const wallThickness = mmToM(input.bin.wallThickness);
+  return {
+    schemaVersion: 1,
+    project: input.project,
+    bin: {
+      shape: input.bin.shape,
+      diameter: input.bin.diameter,
+      cylinderHeight: input.bin.cylinderHeight,
+      fillHeight: input.bin.fillHeight ?? input.bin.cylinderHeight,
+      wallThickness,
+      hopper: {
+        apexHalfAngle: degToRad(input.bin.hopper.apexHalfAngle),
+        outletDiameter: input.bin.hopper.outletDiameter,
+        thickness: mmToM(input.bin.hopper.thickness),
+      },
+      steelDensity: STEEL_DENSITY,
+    },
+    solid,
+    support: {
+      type: input.support.type,
+      columns: input.support.columns,
+      girderDiameter: input.support.girderDiameter ?? input.bin.diameter + wallThickness,
+      segmentsPerSpan: input.support.segmentsPerSpan,
+      grade: input.support.grade,
+      sectionFamilies: [...new Set(input.support.sectionFamilies)],
+    },
+    actions: input.actions,
+  };
+}
