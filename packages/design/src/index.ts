@@ -1,3 +1,6 @@
-import { packageName as specName } from '@binsupport/spec';
-export const packageName = '@binsupport/design';
-export const uses = [specName];
+export * from './result.js';
+export { designFromSpec, CAUTIONS, type DesignOptions, type DesignOutcome } from './design.js';
+export { DesignError, type DesignErrorCode } from './errors.js';
+export { stableJson } from './json.js';
+export { buildRingModel, type RingLayout, type RingModelInput } from './ring.js';
+export { TOOL_NAME, TOOL_VERSION } from './version.js';

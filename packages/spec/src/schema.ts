@@ -94,7 +94,7 @@ export const binSpecInput = z.strictObject(
         type: choice(['ring-on-columns']).default('ring-on-columns'),
         columns: wholeNumber(3, 36, 'columns'),
         girderDiameter: quantity({ min: 1, max: 62, unit: 'm' }).optional(),
-        segmentsPerSpan: wholeNumber(2, 120, 'segments').default(12),
+        segmentsPerSpan: wholeNumber(2, 120, 'segments').default(24),
         grade: choice(steelGrades).default('S355'),
         sectionFamilies: z.array(choice(sectionFamilies), { error: 'must be a list of section families' }).min(1, { error: 'must name at least one section family' }).default(['IPE', 'HEB']),
       },

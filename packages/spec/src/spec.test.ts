@@ -32,7 +32,7 @@ describe('normaliseSpec', () => {
     expect(spec.bin.fillHeight).toBe(12);
     expect(spec.support.girderDiameter).toBeCloseTo(6.006, 12);
     expect(spec.support.grade).toBe('S355');
-    expect(spec.support.segmentsPerSpan).toBe(12);
+    expect(spec.support.segmentsPerSpan).toBe(24);
     expect(spec.actions).toEqual({ permanentFactor: 1.35, solidFactor: 1.5 });
   });
 

@@ -1,0 +1,114 @@
+import { mkdir } from 'node:fs/promises';
+import { join, resolve } from 'node:path';
+import { parseArgs } from 'node:util';
+import { designFromSpec, DesignError, stableJson } from '@binsupport/design';
+import { atomicWrite, writeDesignPdf, writeDesignXlsx } from '@binsupport/deliverables';
+import { readSpecFile, SpecError } from '@binsupport/spec';
+import { version } from './version.js';
+
+export interface CliStreams {
+  stdout: { write(chunk: string): unknown };
+  stderr: { write(chunk: string): unknown };
+}
+
+/** Exit codes: 0 success, 1 a design that cannot be satisfied or a stage that refused, 2 bad input. */
+export const EXIT_OK = 0;
+export const EXIT_NOT_SATISFIED = 1;
+export const EXIT_BAD_INPUT = 2;
+
+const mainHelp = `binsupport ${version}: design of the support girders of steel storage bins
+
+Usage:
+  binsupport design <spec.yaml|spec.json> --out <folder>   design a bin's support girder
+  binsupport --help | --version
+
+Run 'binsupport design --help' for the inputs and outputs of a design.
+
+This is a first-pass design tool. Every result must be verified by a qualified engineer;
+local codes and licensed practice govern.
+`;
+
+const designHelp = `Usage: binsupport design <spec> --out <folder> [--quiet]
+
+Reads a bin specification (YAML or JSON; see docs/input-reference.md for every input, its unit and
+range), derives the stored-solid loads (EN 1991-4), analyses the ring girder under every combination
+and support scenario, picks the lightest adequate section and writes to <folder>:
+  design.json            the full result (SI units; docs/output-schema.md)
+  design.xlsx            workbook: summary, members, utilisations, loads, scenarios, inputs
+  design.pdf             calculation report
+  model-<scenario>.json  the girder model of each support scenario, for re-analysis by a checker
+
+Options:
+  --out <folder>   output folder (created if missing); existing files are replaced whole
+  --quiet          no progress lines
+  --help           this text
+
+Exit codes: 0 designed and verified; 1 no adequate design (the best attempt is still written and
+reported) or an analysis that refused to give an answer; 2 bad input (the message names the input).
+`;
+
+function fail(streams: CliStreams, code: number, message: string): number {
+  streams.stderr.write(`binsupport: ${message}\n`);
+  return code;
+}
+
+async function runDesign(args: string[], streams: CliStreams): Promise<number> {
+  let parsed;
+  try {
+    parsed = parseArgs({ args, allowPositionals: true, options: { out: { type: 'string' }, quiet: { type: 'boolean' }, help: { type: 'boolean' } } });
+  } catch (error) {
+    return fail(streams, EXIT_BAD_INPUT, `${(error as Error).message}\n\n${designHelp}`);
+  }
+  if (parsed.values.help) {
+    streams.stdout.write(designHelp);
+    return EXIT_OK;
+  }
+  const [specPath, ...extra] = parsed.positionals;
+  if (!specPath || extra.length > 0) return fail(streams, EXIT_BAD_INPUT, `design takes exactly one spec file\n\n${designHelp}`);
+  if (!parsed.values.out) return fail(streams, EXIT_BAD_INPUT, `design needs --out <folder>\n\n${designHelp}`);
+  const outDir = resolve(parsed.values.out);
+  const progress = (line: string) => {
+    if (!parsed.values.quiet) streams.stderr.write(`${line}\n`);
+  };
+
+  try {
+    progress(`reading ${specPath}`);
+    const spec = await readSpecFile(specPath);
+    const outcome = await designFromSpec(spec, { progress });
+    await mkdir(outDir, { recursive: true });
+    for (const { scenario, model } of outcome.models) {
+      await atomicWrite(join(outDir, `model-${scenario}.json`), stableJson(model));
+    }
+    await atomicWrite(join(outDir, 'design.json'), stableJson(outcome.result));
+    await writeDesignXlsx(outcome.result, join(outDir, 'design.xlsx'));
+    await writeDesignPdf(outcome.result, join(outDir, 'design.pdf'));
+    progress(`wrote design.json, design.xlsx, design.pdf to ${outDir}`);
+    for (const member of outcome.result.members) {
+      streams.stdout.write(
+        `${member.id}: ${member.section} ${member.grade}, ${(member.mass / 1000).toFixed(2)} t, utilisation ${member.utilisation === null ? "beyond resistance" : member.utilisation.toFixed(3)} (${member.governing.check}, ${member.governing.clause}, ${member.governing.combination}, ${member.governing.scenario})\n`,
+      );
+    }
+    if (outcome.result.status !== 'verified') {
+      return fail(streams, EXIT_NOT_SATISFIED, `no adequate design: ${outcome.result.optimisation.message}`);
+    }
+    return EXIT_OK;
+  } catch (error) {
+    if (error instanceof SpecError) return fail(streams, EXIT_BAD_INPUT, error.message);
+    if (error instanceof DesignError) return fail(streams, error.code === 'BAD_INPUT' ? EXIT_BAD_INPUT : EXIT_NOT_SATISFIED, `${error.message}${error.path ? ` (input: ${error.path})` : ''}`);
+    throw error;
+  }
+}
+
+export async function runCli(argv: string[], streams: CliStreams): Promise<number> {
+  const [command, ...rest] = argv;
+  if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
+    streams.stdout.write(mainHelp);
+    return command === undefined ? EXIT_BAD_INPUT : EXIT_OK;
+  }
+  if (command === '--version') {
+    streams.stdout.write(`${version}\n`);
+    return EXIT_OK;
+  }
+  if (command === 'design') return runDesign(rest, streams);
+  return fail(streams, EXIT_BAD_INPUT, `unknown command '${command}'\n\n${mainHelp}`);
+}

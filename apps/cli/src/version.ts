@@ -1,0 +1,1 @@
+export { TOOL_VERSION as version } from '@binsupport/design';

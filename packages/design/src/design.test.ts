@@ -1,0 +1,74 @@
+import { describe, expect, it } from 'vitest';
+import { normaliseSpec, type BinSpecInput } from '@binsupport/spec';
+import { loadRolledSections, steelGrade } from '@binsupport/steel';
+import { analyseSection, designFromSpec, familyToSeries, loadsFor } from './design.js';
+import { stableJson } from './json.js';
+
+// An invented bin (test data only).
+const base: BinSpecInput = {
+  project: { name: 'Test bin (invented)', date: '2026-12-01' },
+  bin: { diameter: 6, cylinderHeight: 12, wallThickness: 6, hopper: { apexHalfAngle: 30, outletDiameter: 0.4, thickness: 8 } },
+  solid: { name: 'wheat' },
+  support: { columns: 8, segmentsPerSpan: 12 },
+};
+
+/**
+ * Brute force: analyse every candidate with its own section, check it under its own forces and take
+ * the lightest that passes (an exhaustive search over the same table, independent of the
+ * analyse-select loop and of the integer program).
+ */
+function bruteForceChoice(input: BinSpecInput): string | undefined {
+  const spec = normaliseSpec(input);
+  const grade = steelGrade(spec.support.grade);
+  const loads = loadsFor(spec);
+  const series = new Set(spec.support.sectionFamilies.map((family) => familyToSeries[family]));
+  const layout = { radius: spec.support.girderDiameter / 2, columns: spec.support.columns, segmentsPerSpan: spec.support.segmentsPerSpan };
+  const passing = loadRolledSections()
+    .filter((section) => series.has(section.series))
+    .map((section) => analyseSection(spec, loads, layout, section, grade, 5))
+    .filter((entry) => entry.utilisation <= 1)
+    .sort((a, b) => a.section.properties.massPerMetre - b.section.properties.massPerMetre);
+  return passing[0]?.section.designation;
+}
+
+describe('design loop', () => {
+  const variants: Array<[string, BinSpecInput]> = [
+    ['demo-like bin, 8 columns', base],
+    ['6 columns, S235', { ...base, support: { ...base.support, columns: 6, grade: 'S235' } }],
+    ['IPE only, 12 columns', { ...base, support: { ...base.support, columns: 12, sectionFamilies: ['IPE'] } }],
+    ['squat bin, 4 columns, HE B only', { ...base, bin: { ...base.bin, diameter: 8, cylinderHeight: 6 }, support: { ...base.support, columns: 4, sectionFamilies: ['HEB'] } }],
+  ];
+  for (const [name, input] of variants) {
+    it(`picks what a brute-force search over the same table picks: ${name}`, async () => {
+      const { result } = await designFromSpec(normaliseSpec(input));
+      expect(result.status).toBe('verified');
+      expect(result.members[0]?.section).toBe(bruteForceChoice(input));
+      expect(result.members[0]?.utilisation).toBeLessThanOrEqual(1);
+    });
+  }
+
+  it('balances every analysis and applies exactly the weight of solid, plates and girder (statics)', async () => {
+    const { result } = await designFromSpec(normaliseSpec(base));
+    for (const analysis of result.analyses) {
+      const scale = Math.abs(analysis.appliedSum[2]);
+      analysis.reactionSum.forEach((reaction, i) => expect(Math.abs(reaction + (analysis.appliedSum[i] ?? 0)) / scale).toBeLessThan(1e-6));
+    }
+    const characteristic = result.analyses.find((analysis) => analysis.combination === 'SLS-1');
+    const weight = result.loads.totals.solidWeight + result.loads.totals.structureWeight;
+    expect(-(characteristic?.appliedSum[2] ?? 0) / weight).toBeCloseTo(1, 9);
+  });
+
+  it('reports an unsatisfiable design with its best attempt', async () => {
+    const heavy: BinSpecInput = { ...base, bin: { ...base.bin, diameter: 10, cylinderHeight: 20, wallThickness: 10 }, support: { ...base.support, columns: 3, grade: 'S235', sectionFamilies: ['IPE'] } };
+    const { result } = await designFromSpec(normaliseSpec(heavy));
+    expect(result.status).toBe('infeasible');
+    expect(result.members[0]?.utilisation ?? Infinity).toBeGreaterThan(1);
+    expect(result.optimisation.message).toMatch(/no candidate section passes/);
+  });
+
+  it('is deterministic: the same spec gives byte-identical JSON', async () => {
+    const first = stableJson((await designFromSpec(normaliseSpec(base))).result);
+    const second = stableJson((await designFromSpec(normaliseSpec(base))).result);
+    expect(second).toBe(first);
+  });
+});

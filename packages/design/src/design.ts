@@ -1,0 +1,319 @@
+import { analyse, type AnalysisResult, type GirderModel, type SectionStiffness, type Station } from '@binsupport/girder';
+import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
+import { solveSelection } from '@binsupport/optimiser';
+import type { BinSpec } from '@binsupport/spec';
+import { loadRolledSections, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
+import { DesignError } from './errors.js';
+import { envelopeChecks, governingEnvelope, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
+import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
+import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
+import { COLUMNS_UNDER_WEB } from './scenarios.js';
+import { TOOL_NAME, TOOL_VERSION } from './version.js';
+
+export const CAUTIONS = [
+  'This is a first-pass design produced by software. It must be checked and verified by a qualified structural engineer before it is used for construction.',
+  'Local building codes, national annexes and licensed engineering practice govern over every value and assumption in this document.',
+  'The analysis covers only the actions, support scenarios and checks listed in this report; connections, columns, foundations and the shell itself are outside its scope.',
+];
+
+export interface DesignOptions {
+  progress?: (line: string) => void;
+  /** Largest number of analyse-and-select rounds before the loop stops. */
+  maxIterations?: number;
+  /** Stations per element at which internal forces are checked (ends included). */
+  stationsPerElement?: number;
+}
+
+export interface DesignOutcome {
+  result: DesignResult;
+  /** The girder model built for each support scenario, with the final sections. */
+  models: Array<{ scenario: string; model: GirderModel }>;
+}
+
+export const familyToSeries: Record<BinSpec['support']['sectionFamilies'][number], SteelSection['series']> = { IPE: 'IPE', HEB: 'HE B' };
+
+const MEMBER_ID = 'RG';
+const RELATIVE_EQUILIBRIUM_TOLERANCE = 1e-6;
+
+function stiffnessOf(section: SteelSection, grade: SteelGrade, density: number): SectionStiffness {
+  const p = section.properties;
+  return { A: p.area, Iy: p.secondMomentOfAreaY, Iz: p.secondMomentOfAreaZ, It: p.torsionConstant, Iw: p.warpingConstant, E: grade.youngsModulus, G: grade.shearModulus, density };
+}
+
+export interface SectionAnalysis {
+  section: SteelSection;
+  model: GirderModel;
+  analyses: AnalysisResult[];
+  uls: StationSet[];
+  envelopes: CheckEnvelope[];
+  utilisation: number;
+}
+
+export function loadsFor(spec: BinSpec): LoadSet {
+  try {
+    return circularBinLoads({ bin: spec.bin, solid: spec.solid, partialFactors: spec.actions });
+  } catch (error) {
+    if (error instanceof LoadsError) throw new DesignError('BAD_INPUT', error.message, error.path);
+    throw error;
+  }
+}
+
+/** Check the equilibrium of one analysis: reactions balance the applied loads (guard). */
+function guardEquilibrium(analysis: AnalysisResult, scenario: string): void {
+  const scale = Math.max(...analysis.appliedSum.map(Math.abs), 1);
+  for (let i = 0; i < 3; i++) {
+    const imbalance = Math.abs((analysis.reactionSum[i] ?? 0) + (analysis.appliedSum[i] ?? 0));
+    if (imbalance > RELATIVE_EQUILIBRIUM_TOLERANCE * scale) {
+      throw new DesignError('GUARD_FAILED', `equilibrium guard: in ${analysis.combination} / ${scenario} the reactions do not balance the loads along ${'XYZ'[i]} (imbalance ${imbalance.toExponential(3)} N of ${scale.toExponential(3)} N)`);
+    }
+  }
+}
+
+export function analyseSection(spec: BinSpec, loads: LoadSet, layout: RingLayout, section: SteelSection, grade: SteelGrade, stationsPerElement: number): SectionAnalysis {
+  const model = buildRingModel({ layout, section: stiffnessOf(section, grade, spec.bin.steelDensity), sectionDepth: section.dimensions.depth, cases: loads.cases, selfWeightCase: PERMANENT_CASE });
+  const analyses = loads.combinations.map((combination) => {
+    const analysis = analyse(model, { name: combination.name, factors: combination.factors }, { stationsPerElement });
+    guardEquilibrium(analysis, COLUMNS_UNDER_WEB.id);
+    return analysis;
+  });
+  const uls = loads.combinations
+    .map((combination, index) => ({ combination, analysis: analyses[index] }))
+    .filter(({ combination }) => combination.limitState === 'ULS')
+    .map(({ combination, analysis }) => ({ combination: combination.name, scenario: COLUMNS_UNDER_WEB.id, stations: analysis?.stations ?? [] }));
+  const envelopes = envelopeChecks(section, grade, uls);
+  return { section, model, analyses, uls, envelopes, utilisation: maxUtilisation(envelopes) };
+}
+
+/** Where a station lies around the ring, in words a site engineer recognises. */
+function positionOf(model: GirderModel, layout: RingLayout, station: Station): Position {
+  const element = model.elements.find((candidate) => candidate.id === station.element);
+  const nodeI = model.nodes.find((node) => node.id === element?.nodeI);
+  const nodeJ = model.nodes.find((node) => node.id === element?.nodeJ);
+  if (!element || !nodeI || !nodeJ) return { element: station.element, x: station.x, angle: 0, description: station.element };
+  const L = Math.hypot(nodeJ.x - nodeI.x, nodeJ.y - nodeI.y, nodeJ.z - nodeI.z);
+  const t = L > 0 ? station.x / L : 0;
+  const x = nodeI.x + t * (nodeJ.x - nodeI.x);
+  const y = nodeI.y + t * (nodeJ.y - nodeI.y);
+  let angle = Math.atan2(y, x);
+  if (angle < 0) angle += 2 * Math.PI;
+  const span = (2 * Math.PI) / layout.columns;
+  const spanIndex = Math.floor(angle / span + 1e-9) % layout.columns;
+  const fromColumn = angle - spanIndex * span;
+  const degrees = (fromColumn * 180) / Math.PI;
+  const spanDegrees = (span * 180) / Math.PI;
+  let description: string;
+  if (degrees < 1e-6 || spanDegrees - degrees < 1e-6) {
+    const at = degrees < 1e-6 ? spanIndex : (spanIndex + 1) % layout.columns;
+    description = `over column ${columnId(at)}`;
+  } else if (Math.abs(degrees - spanDegrees / 2) < 1e-6) {
+    description = `mid-span between ${columnId(spanIndex)} and ${columnId((spanIndex + 1) % layout.columns)}`;
+  } else {
+    description = `${degrees.toFixed(1)} deg from ${columnId(spanIndex)} toward ${columnId((spanIndex + 1) % layout.columns)}`;
+  }
+  return { element: station.element, x: station.x, angle, description };
+}
+
+function diagramOf(model: GirderModel, layout: RingLayout, stations: Station[]): ForceDiagram {
+  const rows = stations.map((station) => ({ station, angle: positionOf(model, layout, station).angle }));
+  rows.sort((a, b) => a.angle - b.angle);
+  return {
+    angle: rows.map((row) => row.angle),
+    N: rows.map((row) => row.station.N),
+    Vz: rows.map((row) => row.station.Vz),
+    T: rows.map((row) => row.station.T),
+    My: rows.map((row) => row.station.My),
+    Mz: rows.map((row) => row.station.Mz),
+    B: rows.map((row) => row.station.B),
+  };
+}
+
+function peakOf(stations: Station[], key: 'N' | 'Vz' | 'T' | 'My' | 'Mz' | 'B'): number {
+  return stations.reduce((max, station) => Math.max(max, Math.abs(station[key])), 0);
+}
+
+/** The whole pipeline for one spec: loads, analysis, checks, selection, verification, result. */
+export async function designFromSpec(spec: BinSpec, options: DesignOptions = {}): Promise<DesignOutcome> {
+  const progress = options.progress ?? (() => undefined);
+  const maxIterations = options.maxIterations ?? 8;
+  const stationsPerElement = options.stationsPerElement ?? 5;
+  const grade = steelGrade(spec.support.grade);
+  const series = new Set(spec.support.sectionFamilies.map((family) => familyToSeries[family]));
+  const candidates = loadRolledSections()
+    .filter((section) => series.has(section.series))
+    .sort((a, b) => a.properties.massPerMetre - b.properties.massPerMetre || a.designation.localeCompare(b.designation));
+  if (candidates.length === 0) throw new DesignError('BAD_INPUT', 'no candidate sections in the chosen families', 'support.sectionFamilies');
+
+  const loads = loadsFor(spec);
+  progress(`loads: solid ${(loads.totals.solidWeight / 1e3).toFixed(1)} kN, plates ${(loads.totals.structureWeight / 1e3).toFixed(1)} kN, ${loads.combinations.length} combinations`);
+  const layout: RingLayout = { radius: spec.support.girderDiameter / 2, columns: spec.support.columns, segmentsPerSpan: spec.support.segmentsPerSpan };
+  const girderLength = 2 * Math.PI * layout.radius;
+
+  // Start from the heaviest candidate: its self weight bounds the others', so the first forces are on
+  // the safe side; each round re-analyses the chosen section until the choice repeats.
+  const analysed = new Map<string, SectionAnalysis>();
+  const analyseCached = (section: SteelSection) => {
+    let entry = analysed.get(section.designation);
+    if (!entry) {
+      entry = analyseSection(spec, loads, layout, section, grade, stationsPerElement);
+      analysed.set(section.designation, entry);
+    }
+    return entry;
+  };
+  let current = candidates[candidates.length - 1] as SteelSection;
+  const steps: OptimisationStep[] = [];
+  let converged = false;
+  let selectionStatus: 'optimal' | 'feasible' | 'infeasible' = 'infeasible';
+  let feasibleCount = 0;
+  for (let iteration = 1; iteration <= maxIterations; iteration++) {
+    const state = analyseCached(current);
+    const evaluated = candidates.map((section) => ({ section, utilisation: maxUtilisation(envelopeChecks(section, grade, state.uls)) }));
+    feasibleCount = evaluated.filter((entry) => entry.utilisation <= 1).length;
+    const selection = await solveSelection({
+      groups: [{ id: MEMBER_ID, candidates: evaluated.map((entry) => ({ id: entry.section.designation, key: entry.section.designation, cost: entry.section.properties.massPerMetre * girderLength, feasible: entry.utilisation <= 1 })) }],
+    });
+    selectionStatus = selection.status;
+    steps.push({ iteration, choice: { [MEMBER_ID]: current.designation }, mass: current.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(state.utilisation) });
+    progress(`round ${iteration}: analysed ${current.designation} (utilisation ${state.utilisation.toFixed(3)}); ${feasibleCount} of ${candidates.length} candidates pass under its forces`);
+    if (selection.status === 'infeasible') break;
+    const chosenId = selection.choice[MEMBER_ID];
+    const chosen = candidates.find((section) => section.designation === chosenId);
+    if (!chosen) throw new DesignError('ANALYSIS_FAILED', `the optimiser chose '${chosenId}', which is not a candidate`);
+    if (chosen.designation === current.designation) {
+      converged = true;
+      break;
+    }
+    if (analysed.has(chosen.designation)) {
+      progress(`round ${iteration}: the choice ${chosen.designation} repeats an earlier round (cycle); keeping the lightest verified design`);
+      break;
+    }
+    current = chosen;
+  }
+
+  // Forces depend on the section (its self weight, and the depth that is the lever arm of the
+  // hopper's pull), so a lighter section can pass under its own forces although it failed under the
+  // forces of a heavier one. Before accepting the loop's answer, re-analyse each lighter candidate
+  // with its own section, lightest first, and take the first that passes.
+  const loopBest = [...analysed.values()].filter((entry) => entry.utilisation <= 1).sort((a, b) => a.section.properties.massPerMetre - b.section.properties.massPerMetre)[0];
+  if (loopBest) {
+    let round = steps.length;
+    for (const section of candidates) {
+      if (section.properties.massPerMetre >= loopBest.section.properties.massPerMetre) break;
+      const wasAnalysed = analysed.has(section.designation);
+      const state = analyseCached(section);
+      if (!wasAnalysed) {
+        round += 1;
+        steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(state.utilisation) });
+      }
+      if (state.utilisation <= 1) {
+        progress(`descent: the lighter ${section.designation} passes under its own forces (utilisation ${state.utilisation.toFixed(3)})`);
+        break;
+      }
+    }
+  }
+
+  // The final design is always one that was analysed with its own sections: the lightest verified
+  // one, or, when none passes, the one with the lowest utilisation (reported as not satisfied).
+  const verified = [...analysed.values()].filter((entry) => entry.utilisation <= 1);
+  verified.sort((a, b) => a.section.properties.massPerMetre - b.section.properties.massPerMetre);
+  const bestAttempt = [...analysed.values()].sort((a, b) => a.utilisation - b.utilisation || b.section.properties.massPerMetre - a.section.properties.massPerMetre)[0] as SectionAnalysis;
+  const final = verified[0] ?? bestAttempt;
+  const status: DesignResult['status'] = verified.length > 0 ? 'verified' : 'infeasible';
+
+  guardLoadTotals(final, loads, girderLength);
+
+  const governing = governingEnvelope(final.envelopes);
+  if (!governing) throw new DesignError('ANALYSIS_FAILED', 'no check was evaluated for the girder');
+
+  const positionFor = (station: Station) => positionOf(final.model, layout, station);
+  const member: MemberResult = {
+    id: MEMBER_ID,
+    description: `ring girder on ${layout.columns} columns, centroid radius ${layout.radius.toFixed(3)} m`,
+    section: final.section.designation,
+    grade: grade.name,
+    length: girderLength,
+    mass: final.section.properties.massPerMetre * girderLength,
+    massPerLength: final.section.properties.massPerMetre,
+    utilisation: finiteOrNull(final.utilisation),
+    governing: {
+      check: governing.check.id,
+      title: governing.check.title,
+      clause: governing.check.clause,
+      combination: governing.combination,
+      scenario: governing.scenario,
+      position: positionFor(governing.station),
+      inputs: governing.check.inputs,
+      intermediate: governing.check.intermediate,
+    },
+  };
+  const utilisations: UtilisationRow[] = final.envelopes.map((envelope) => ({
+    member: MEMBER_ID,
+    section: final.section.designation,
+    check: envelope.check.id,
+    clause: envelope.check.clause,
+    combination: envelope.combination,
+    scenario: envelope.scenario,
+    position: positionFor(envelope.station),
+    utilisation: finiteOrNull(envelope.check.utilisation),
+    ...(envelope.check.outOfScope ? { note: envelope.check.outOfScope } : {}),
+  }));
+  const analyses: AnalysisSummary[] = final.analyses.map((analysis) => ({
+    combination: analysis.combination,
+    scenario: COLUMNS_UNDER_WEB.id,
+    converged: analysis.converged,
+    iterations: analysis.iterations,
+    residual: analysis.residual,
+    reactionSum: analysis.reactionSum,
+    appliedSum: analysis.appliedSum,
+    peaks: { N: peakOf(analysis.stations, 'N'), Vz: peakOf(analysis.stations, 'Vz'), T: peakOf(analysis.stations, 'T'), My: peakOf(analysis.stations, 'My'), Mz: peakOf(analysis.stations, 'Mz'), B: peakOf(analysis.stations, 'B') },
+    diagram: diagramOf(final.model, layout, analysis.stations),
+  }));
+  const geometry = circularBinGeometry(spec.bin);
+  const girderWeight = final.section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
+  const message =
+    status === 'verified'
+      ? `${final.section.designation} is the lightest candidate that passes every check under its own re-analysed forces${converged ? '' : ' (the selection loop stopped before the choice repeated)'}`
+      : `no candidate section passes; the best attempt ${final.section.designation} reaches utilisation ${Number.isFinite(final.utilisation) ? final.utilisation.toFixed(3) : 'beyond its resistance'} in ${governing.check.id} (${governing.check.clause})`;
+  const result: DesignResult = {
+    schemaVersion: DESIGN_SCHEMA_VERSION,
+    tool: { name: TOOL_NAME, version: TOOL_VERSION },
+    project: { name: spec.project.name, client: spec.project.client, site: spec.project.site, reference: spec.project.reference, designer: spec.project.designer, date: spec.project.date },
+    status,
+    cautions: CAUTIONS,
+    input: spec,
+    bin: { diameter: spec.bin.diameter, cylinderHeight: spec.bin.cylinderHeight, hopperHeight: geometry.hopperHeight, apexHalfAngle: spec.bin.hopper.apexHalfAngle, solid: spec.solid.name },
+    girder: { kind: 'ring', radius: layout.radius, columns: layout.columns, segments: layout.columns * layout.segmentsPerSpan, spanAngle: (2 * Math.PI) / layout.columns },
+    loads: {
+      cases: loads.cases.map((loadCase) => ({ name: loadCase.name, description: loadCase.description, kind: loadCase.kind, verticalLineLoad: loadCase.verticalLineLoad, radialLineLoad: loadCase.radialLineLoad, verticalResultant: loadCase.verticalResultant })),
+      combinations: loads.combinations,
+      profiles: loads.profiles,
+      totals: { solidWeight: loads.totals.solidWeight, structureWeight: loads.totals.structureWeight + girderWeight },
+      derivation: loads.derivation,
+    },
+    scenarios: [COLUMNS_UNDER_WEB],
+    analyses,
+    members: [member],
+    utilisations,
+    optimisation: { status: selectionStatus, objective: 'mass', candidates: candidates.length, feasibleCandidates: feasibleCount, iterations: steps, converged, message },
+    totals: { steelMass: member.mass },
+  };
+  progress(message);
+  return { result, models: [{ scenario: COLUMNS_UNDER_WEB.id, model: final.model }] };
+}
+
+function finiteOrNull(value: number): number | null {
+  return Number.isFinite(value) ? value : null;
+}
+
+/** The vertical load of the characteristic combination equals solid + plates + girder (guard). */
+function guardLoadTotals(final: SectionAnalysis, loads: LoadSet, girderLength: number): void {
+  const index = loads.combinations.findIndex((combination) => Object.values(combination.factors).every((factor) => factor === 1));
+  const analysis = final.analyses[index];
+  if (!analysis) return;
+  const expected = loads.totals.solidWeight + loads.totals.structureWeight + final.section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
+  const applied = -analysis.appliedSum[2];
+  if (Math.abs(applied - expected) > RELATIVE_EQUILIBRIUM_TOLERANCE * expected) {
+    throw new DesignError('GUARD_FAILED', `load-total guard: ${analysis.combination} applies ${applied.toExponential(6)} N downward, but solid, plates and girder weigh ${expected.toExponential(6)} N`);
+  }
+}
+
+export { nodeAngle };

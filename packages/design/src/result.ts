@@ -1,0 +1,212 @@
+// The DesignResult: plain, JSON-serialisable data and the single source of every deliverable.
+// docs/output-schema.md is the contract for outside scripts; change both together and bump
+// DESIGN_SCHEMA_VERSION when a stable field changes meaning.
+//
+// Units: SI base units throughout (N, m, Pa, kg, rad). Angles around the bin are measured from +X,
+// counter-clockwise seen from above. Internal forces follow the girder package's convention: resultants
+// on the face whose outward normal is the member's local +x, as right-handed vectors (N > 0 tension;
+// My > 0 puts the top fibre, local +z, in tension, so a sagging girder has My < 0).
+
+export const DESIGN_SCHEMA_VERSION = '1.0.0';
+
+export interface ProjectInfo {
+  name: string;
+  client: string;
+  site: string;
+  reference: string;
+  designer: string;
+  /** Date of issue as given in the spec (kept as text so that outputs are reproducible). */
+  date: string;
+}
+
+/** One step of a derivation, kept so that the report can show the formula with its numbers. */
+export interface DerivationStep {
+  symbol: string;
+  description: string;
+  expression: string;
+  value: number;
+  /** SI unit of `value` (e.g. 'm', 'Pa', 'N/m', '-'). */
+  unit: string;
+  clause: string;
+}
+
+export interface LoadCaseSummary {
+  name: string;
+  description: string;
+  kind: 'permanent' | 'variable';
+  /** Vertical line load on the support line, N/m, downward positive. */
+  verticalLineLoad: number;
+  /** Radial line load on the support line, N/m, positive toward the bin axis (puts a ring in compression). */
+  radialLineLoad: number;
+  /** Resultant vertical force of the case, N, downward positive. */
+  verticalResultant: number;
+}
+
+export interface CombinationSummary {
+  name: string;
+  limitState: 'ULS' | 'SLS';
+  /** Human-readable expression, e.g. "1.35 G + 1.50 Q_s". */
+  expression: string;
+  factors: Record<string, number>;
+  clause: string;
+}
+
+export interface PressureProfile {
+  case: string;
+  part: 'wall' | 'hopper';
+  /** Depth below the equivalent surface, m. */
+  z: number[];
+  /** Horizontal (normal) pressure on the wall, Pa. */
+  ph: number[];
+  /** Wall frictional traction, Pa. */
+  pw: number[];
+  /** Mean vertical stress in the solid, Pa. */
+  pv: number[];
+}
+
+export interface LoadsResult {
+  cases: LoadCaseSummary[];
+  combinations: CombinationSummary[];
+  profiles: PressureProfile[];
+  totals: {
+    /** Weight of the stored solid, N. */
+    solidWeight: number;
+    /** Weight of the structure carried by the support line (plates and girder), N. */
+    structureWeight: number;
+  };
+  derivation: DerivationStep[];
+}
+
+export interface ScenarioSummary {
+  id: string;
+  title: string;
+  description: string;
+  /** Whether the design envelope includes this scenario. */
+  credible: boolean;
+}
+
+/** Internal forces around the girder for one analysis, sampled at stations. */
+export interface ForceDiagram {
+  /** Position of each station around the bin, rad. */
+  angle: number[];
+  N: number[];
+  Vz: number[];
+  T: number[];
+  My: number[];
+  Mz: number[];
+  B: number[];
+}
+
+export interface AnalysisSummary {
+  combination: string;
+  scenario: string;
+  converged: boolean;
+  iterations: number;
+  /** Relative residual |K u - f| / |f| of the final solve. */
+  residual: number;
+  /** Sum of reactions [Fx, Fy, Fz], N. */
+  reactionSum: [number, number, number];
+  /** Sum of applied loads [Fx, Fy, Fz], N. */
+  appliedSum: [number, number, number];
+  /** Largest absolute internal forces over the girder. */
+  peaks: { N: number; Vz: number; T: number; My: number; Mz: number; B: number };
+  diagram: ForceDiagram;
+}
+
+export interface Position {
+  element: string;
+  /** Distance from the element's first node, m. */
+  x: number;
+  /** Angle around the bin, rad. */
+  angle: number;
+  description: string;
+}
+
+export interface GoverningCase {
+  check: string;
+  title: string;
+  clause: string;
+  combination: string;
+  scenario: string;
+  position: Position;
+  inputs: Record<string, number>;
+  intermediate: Record<string, number>;
+}
+
+export interface MemberResult {
+  id: string;
+  description: string;
+  section: string;
+  grade: string;
+  /** Total length of the member group, m. */
+  length: number;
+  /** Mass, kg. */
+  mass: number;
+  /** Mass per metre, kg/m. */
+  massPerLength: number;
+  /** Largest utilisation; null only in an infeasible design whose best attempt has no resistance left (or lies outside a check's scope). */
+  utilisation: number | null;
+  governing: GoverningCase;
+}
+
+export interface UtilisationRow {
+  member: string;
+  section: string;
+  check: string;
+  clause: string;
+  combination: string;
+  scenario: string;
+  position: Position;
+  /** null when the check is outside its scope for this section (see `note`). */
+  utilisation: number | null;
+  note?: string;
+}
+
+export interface OptimisationStep {
+  iteration: number;
+  choice: Record<string, string>;
+  mass: number;
+  /** Largest utilisation under the section's own forces; null when a check is outside its scope (e.g. a class 4 section). */
+  maxUtilisation: number | null;
+}
+
+export interface OptimisationSummary {
+  status: 'optimal' | 'feasible' | 'infeasible';
+  objective: 'mass';
+  candidates: number;
+  feasibleCandidates: number;
+  iterations: OptimisationStep[];
+  converged: boolean;
+  message: string;
+}
+
+export interface DesignResult {
+  schemaVersion: string;
+  tool: { name: string; version: string };
+  project: ProjectInfo;
+  status: 'verified' | 'infeasible';
+  cautions: string[];
+  /** The validated specification in SI units, as used by the design. */
+  input: unknown;
+  bin: {
+    diameter: number;
+    cylinderHeight: number;
+    hopperHeight: number;
+    apexHalfAngle: number;
+    solid: string;
+  };
+  girder: {
+    kind: 'ring';
+    radius: number;
+    columns: number;
+    segments: number;
+    spanAngle: number;
+  };
+  loads: LoadsResult;
+  scenarios: ScenarioSummary[];
+  analyses: AnalysisSummary[];
+  members: MemberResult[];
+  utilisations: UtilisationRow[];
+  optimisation: OptimisationSummary;
+  totals: { steelMass: number };
+}

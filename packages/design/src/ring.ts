@@ -1,0 +1,104 @@
+import type { ElementLineLoad, GirderModel, LoadCase, NodalLoad, PointSpring, SectionStiffness, Support, Vec3 } from '@binsupport/girder';
+import type { SupportLineCase } from '@binsupport/loads';
+
+/** A ring girder on equally spaced columns: the plan data the model builder needs (SI). */
+export interface RingLayout {
+  /** Radius of the girder's centroid line, m. */
+  radius: number;
+  columns: number;
+  segmentsPerSpan: number;
+}
+
+export const RING_SECTION = 'ring';
+
+/**
+ * Tangential bracing at each column top, N/m. The columns of a ring are braced in the tangential
+ * plane; under the symmetric gravity cases the bracing carries no force (a modelling choice, common
+ * practice), but it removes the ring's rigid-body motions in plan.
+ */
+export const TANGENTIAL_BRACING_STIFFNESS = 1e8;
+
+export function nodeId(index: number): string {
+  return `N${index + 1}`;
+}
+
+export function elementId(index: number): string {
+  return `RG${index + 1}`;
+}
+
+export function columnId(index: number): string {
+  return `C${index + 1}`;
+}
+
+/** Angle of ring node k, rad: column j stands at 2 pi j / n, nodes are spaced evenly between. */
+export function nodeAngle(layout: RingLayout, index: number): number {
+  return (2 * Math.PI * index) / (layout.columns * layout.segmentsPerSpan);
+}
+
+/** What to build: a ring of straight segments at the centroid radius, columns under the web. */
+export interface RingModelInput {
+  layout: RingLayout;
+  section: SectionStiffness;
+  /** Depth of the girder section, m: the transition sits on the top flange, h/2 above the centroid. */
+  sectionDepth: number;
+  cases: SupportLineCase[];
+  /** Name of the case that carries the girder's self weight. */
+  selfWeightCase: string;
+}
+
+/**
+ * Build the girder model of a ring on columns under the web (the support scenario
+ * 'columns-under-web'). Support-line loads are per unit length of the circle of radius
+ * `lineRadius`; on the girder they keep their resultant per segment:
+ * - the vertical line load acts along each straight segment (so the segment bends under it);
+ * - the hopper's radial pull, and the moments of both loads about the centroid (the pull arrives at
+ *   the top flange, h/2 above the centroid; the line of action may sit off the centroid radius), are
+ *   lumped at the nodes along the node's own radial and tangential directions. A uniform moment
+ *   about a curved axis is carried by a closed ring in bending alone; spread along straight
+ *   segments it would add a spurious torque of +-m L/2 in every segment, which lumping avoids.
+ */
+export function buildRingModel(input: RingModelInput): GirderModel {
+  const { layout, section, sectionDepth } = input;
+  const R = layout.radius;
+  const N = layout.columns * layout.segmentsPerSpan;
+  const nodes = Array.from({ length: N }, (_, k) => {
+    const angle = nodeAngle(layout, k);
+    return { id: nodeId(k), x: R * Math.cos(angle), y: R * Math.sin(angle), z: 0 };
+  });
+  const elements = Array.from({ length: N }, (_, k) => ({ id: elementId(k), nodeI: nodeId(k), nodeJ: nodeId((k + 1) % N), section: RING_SECTION, up: [0, 0, 1] as Vec3 }));
+
+  const supports: Support[] = [];
+  const springs: PointSpring[] = [];
+  for (let j = 0; j < layout.columns; j++) {
+    const k = j * layout.segmentsPerSpan;
+    const angle = nodeAngle(layout, k);
+    supports.push({ node: nodeId(k), fix: ['uz'] });
+    springs.push({ id: `${columnId(j)}-bracing`, node: nodeId(k), direction: [-Math.sin(angle), Math.cos(angle), 0], stiffness: TANGENTIAL_BRACING_STIFFNESS });
+  }
+
+  const segmentAngle = (2 * Math.PI) / N;
+  const chord = 2 * R * Math.sin(segmentAngle / 2);
+  const loadCases: LoadCase[] = input.cases.map((loadCase) => {
+    // Resultants of the case on one segment's (or one node's) arc of the support line.
+    const arcOfLine = loadCase.lineRadius * segmentAngle;
+    const verticalPerNode = loadCase.verticalLineLoad * arcOfLine;
+    const radialPerNode = loadCase.radialLineLoad * arcOfLine;
+    const radialOffset = loadCase.lineRadius - R;
+    const lineLoads: ElementLineLoad[] = elements.map((element) => ({ element: element.id, q: [0, 0, -verticalPerNode / chord] }));
+    const nodalLoads: NodalLoad[] = nodes.map((node, k) => {
+      const angle = nodeAngle(layout, k);
+      const outward: Vec3 = [Math.cos(angle), Math.sin(angle), 0];
+      const force: Vec3 = [-radialPerNode * outward[0], -radialPerNode * outward[1], 0];
+      // Moment about the centroid of the loads at their line of action, offset e from the centroid:
+      // e x F for the pull (at the top flange) plus e x (vertical load), e = (lineRadius - R) r + (h/2) z.
+      const offset: Vec3 = [radialOffset * outward[0], radialOffset * outward[1], sectionDepth / 2];
+      const total: Vec3 = [force[0], force[1], -verticalPerNode];
+      const moment: Vec3 = [offset[1] * total[2] - offset[2] * total[1], offset[2] * total[0] - offset[0] * total[2], offset[0] * total[1] - offset[1] * total[0]];
+      return { node: node.id, force, moment };
+    });
+    // Self weight on the chords, scaled so that the ring weighs what the curved girder (arc) weighs.
+    return { name: loadCase.name, lineLoads, nodalLoads, selfWeightFactor: loadCase.name === input.selfWeightCase ? (R * segmentAngle) / chord : 0 };
+  });
+
+  return { nodes, elements, sections: { [RING_SECTION]: section }, supports, springs, loadCases };
+}
