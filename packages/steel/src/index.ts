@@ -1,1 +1,12 @@
-export const packageName = '@binsupport/steel';
+export { SteelError } from './errors.js';
+export type { SteelErrorCode } from './errors.js';
+export { sectionProperties, shearAreaParallelToWeb, steelDensity } from './properties.js';
+export type { ISectionDimensions, SectionProperties } from './properties.js';
+export { loadRolledSections, parseRolledSectionTable, rolledSection } from './sections.js';
+export type { SectionSeries, SteelSection } from './sections.js';
+export { steelGrade, steelGradeNames, strengthsForThickness } from './grades.js';
+export type { SteelGrade, SteelGradeOptions, StrengthBand } from './grades.js';
+export { classifySection, sectionYieldStrength } from './classification.js';
+export type { ClassifiableSection, CombinedClassification, ElementClassification, SectionClass, SectionClassification } from './classification.js';
+export { checkSection, governingCheck } from './checks.js';
+export type { CheckableSection, CheckOptions, CheckResult, InternalForces } from './checks.js';

@@ -1,0 +1,41 @@
+import { describe, expect, it } from 'vitest';
+import { EXIT_BAD_INPUT, EXIT_OK, runCli } from './cli.js';
+
+function capture() {
+  const out: string[] = [];
+  const err: string[] = [];
+  return { streams: { stdout: { write: (chunk: string) => out.push(chunk) }, stderr: { write: (chunk: string) => err.push(chunk) } }, out, err };
+}
+
+describe('binsupport command line', () => {
+  it('prints the usage with the cautions for --help', async () => {
+    const { streams, out } = capture();
+    expect(await runCli(['--help'], streams)).toBe(EXIT_OK);
+    expect(out.join('')).toMatch(/binsupport design <spec.yaml\|spec.json> --out <folder>/);
+    expect(out.join('')).toMatch(/verified by a qualified engineer/);
+  });
+
+  it('rejects an unknown command with exit code 2 and the usage', async () => {
+    const { streams, err } = capture();
+    expect(await runCli(['desing'], streams)).toBe(EXIT_BAD_INPUT);
+    expect(err.join('')).toMatch(/unknown command 'desing'/);
+  });
+
+  it('asks for --out and for exactly one spec', async () => {
+    const first = capture();
+    expect(await runCli(['design', 'a.yaml'], first.streams)).toBe(EXIT_BAD_INPUT);
+    expect(first.err.join('')).toMatch(/design needs --out <folder>/);
+    const second = capture();
+    expect(await runCli(['design', '--out', 'x'], second.streams)).toBe(EXIT_BAD_INPUT);
+    expect(second.err.join('')).toMatch(/exactly one spec file/);
+  });
+
+  it('names the file when the spec has the wrong extension or does not exist', async () => {
+    const wrong = capture();
+    expect(await runCli(['design', 'spec.txt', '--out', '/tmp/never-written'], wrong.streams)).toBe(EXIT_BAD_INPUT);
+    expect(wrong.err.join('')).toMatch(/spec.txt: a spec must be a .yaml, .yml or .json file/);
+    const missing = capture();
+    expect(await runCli(['design', 'no-such-spec.yaml', '--out', '/tmp/never-written'], missing.streams)).toBe(EXIT_BAD_INPUT);
+    expect(missing.err.join('')).toMatch(/no-such-spec.yaml: the spec file cannot be read/);
+  });
+});

@@ -1,0 +1,47 @@
+// Every output file is written whole or not at all (DESIGN.md, "Errors"): the bytes go to a temp file
+// in the target's own folder (a rename is only atomic within one file system), are flushed to disk,
+// and the temp file is then renamed over the target. On any failure the temp file is removed and an
+// existing target is left as it was.
+import { randomBytes } from 'node:crypto';
+import { open, rename, rm } from 'node:fs/promises';
+import { basename, dirname, join } from 'node:path';
+
+/** The temp-file name used for `path`: `<name>.tmp-<pid>-<random>` beside it. */
+export function tempPathFor(path: string): string {
+  const suffix = `${process.pid}-${randomBytes(6).toString('hex')}`;
+  return join(dirname(path), `${basename(path)}.tmp-${suffix}`);
+}
+
+export async function atomicWrite(path: string, bytes: Uint8Array | string): Promise<void> {
+  const tempPath = tempPathFor(path);
+  try {
+    // 'wx': never reuse a file that happens to exist under the temp name.
+    const handle = await open(tempPath, 'wx', 0o644);
+    try {
+      await handle.writeFile(bytes);
+      await handle.sync();
+    } finally {
+      await handle.close();
+    }
+    await rename(tempPath, path);
+  } catch (error) {
+    await rm(tempPath, { force: true });
+    throw error;
+  }
+  await syncFolder(dirname(path));
+}
+
+// Make the rename itself durable. Some platforms and file systems cannot open or fsync a folder;
+// the file is already complete and in place by then, so that is not an error.
+async function syncFolder(folder: string): Promise<void> {
+  try {
+    const handle = await open(folder, 'r');
+    try {
+      await handle.sync();
+    } finally {
+      await handle.close();
+    }
+  } catch {
+    // best effort only
+  }
+}

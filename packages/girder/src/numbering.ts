@@ -1,0 +1,64 @@
+/**
+ * The numbering step: user ids → node indices → equation numbers. Node freedoms are addressed by
+ * a "slot" nodeIndex * 7 + dofIndex (DOFS order); each slot has an equation number, or −1 when it
+ * is not an unknown:
+ * - fixed by a support (its reaction is recovered after the solve), or
+ * - a warping freedom w at a node where no element has warping stiffness (every element there has
+ *   Iw = 0, St Venant torsion): it would be a zero row of K; it is left out and reported as 0.
+ * Equations are numbered in node order here; the solver reorders them (rcm.ts).
+ */
+import type { Dof, GirderModel } from './model.js';
+import { DOFS, DOFS_PER_NODE } from './model.js';
+
+export interface EquationNumbering {
+  nodeCount: number;
+  nodeIndex: ReadonlyMap<string, number>;
+  /** Equation of each slot, or −1. */
+  equation: Int32Array;
+  /** 1 where a support fixes the slot. */
+  fixed: Uint8Array;
+  equationCount: number;
+  /** Slot of each equation. */
+  equationSlot: Int32Array;
+}
+
+const WARPING = DOFS.indexOf('w');
+
+export function dofIndex(dof: Dof): number {
+  return DOFS.indexOf(dof);
+}
+
+export function numberEquations(model: GirderModel): EquationNumbering {
+  const nodeIndex = new Map<string, number>();
+  model.nodes.forEach((node, i) => nodeIndex.set(node.id, i));
+  const nodeCount = model.nodes.length;
+  const slots = nodeCount * DOFS_PER_NODE;
+
+  const fixed = new Uint8Array(slots);
+  for (const support of model.supports) {
+    const n = nodeIndex.get(support.node) as number;
+    for (const dof of support.fix) fixed[n * DOFS_PER_NODE + dofIndex(dof)] = 1;
+  }
+
+  const warpingStiffened = new Uint8Array(nodeCount);
+  for (const element of model.elements) {
+    const section = model.sections[element.section];
+    if (section !== undefined && section.Iw > 0) {
+      warpingStiffened[nodeIndex.get(element.nodeI) as number] = 1;
+      warpingStiffened[nodeIndex.get(element.nodeJ) as number] = 1;
+    }
+  }
+
+  const equation = new Int32Array(slots).fill(-1);
+  const equationSlot: number[] = [];
+  for (let n = 0; n < nodeCount; n++) {
+    for (let k = 0; k < DOFS_PER_NODE; k++) {
+      const slot = n * DOFS_PER_NODE + k;
+      if (fixed[slot] === 1) continue;
+      if (k === WARPING && warpingStiffened[n] === 0) continue;
+      equation[slot] = equationSlot.length;
+      equationSlot.push(slot);
+    }
+  }
+  return { nodeCount, nodeIndex, equation, fixed, equationCount: equationSlot.length, equationSlot: Int32Array.from(equationSlot) };
+}

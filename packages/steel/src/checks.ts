@@ -1,0 +1,472 @@
+import { classifySection } from './classification.js';
+import type { ClassifiableSection, SectionClass } from './classification.js';
+import { SteelError } from './errors.js';
+import type { SteelGrade } from './grades.js';
+import { filletGeometry, shearAreaParallelToWeb } from './properties.js';
+
+/**
+ * Internal forces at one cross-section, in the member's local axes (x along the member, z the strong-axis
+ * normal, y completing a right-handed set), SI units:
+ *  - N [N], tension positive
+ *  - Vy, Vz [N], shear parallel to the flanges and to the web
+ *  - Tsv [N m], St Venant part of the torque; Tw [N m], warping part (T = Tsv + Tw)
+ *  - My, Mz [N m], bending moments as vector components about y and z: the normal stress is
+ *    sigma = N/A + My z / I_y - Mz y / I_z (so My > 0 stretches the +z flange)
+ *  - B [N m2], bimoment, B = E I_w phi'' with phi the twist about +x; its normal stress is
+ *    sigma = B omega / I_w with the sectorial coordinate omega = y z at the flange mid-planes
+ *    (|omega| = W_n0 = h0 b / 4 at the tips; B > 0 stretches the tips at +y+z and -y-z)
+ */
+export interface InternalForces {
+  N: number;
+  Vy: number;
+  Vz: number;
+  Tsv: number;
+  Tw: number;
+  My: number;
+  Mz: number;
+  B: number;
+}
+
+export interface CheckOptions {
+  /** eta of EN 1993-1-1 6.2.6(3) and EN 1993-1-5 5.1; 1.0 (conservative) unless given */
+  eta?: number;
+}
+
+export interface CheckResult {
+  /** stable identifier, e.g. "shear-z" */
+  id: string;
+  title: string;
+  /** e.g. "EN 1993-1-1 6.2.6" */
+  clause: string;
+  /** design effect / design resistance; Infinity when the resistance is nil or the check is out of scope */
+  utilisation: number;
+  inputs: Record<string, number>;
+  intermediate: Record<string, number>;
+  /** set when the check cannot be made by these rules (e.g. a class 4 section); utilisation is then Infinity */
+  outOfScope?: string;
+}
+
+/** A section the checks can use: dimensions and properties (a SteelSection fits). */
+export type CheckableSection = ClassifiableSection;
+
+const forceNames: Array<keyof InternalForces> = ['N', 'Vy', 'Vz', 'Tsv', 'Tw', 'My', 'Mz', 'B'];
+
+function checkForces(forces: InternalForces): void {
+  for (const name of forceNames) {
+    const value = forces[name];
+    if (typeof value !== 'number' || !Number.isFinite(value)) {
+      throw new SteelError('INVALID_FORCES', `Internal force ${name} must be a finite number in SI units; got ${String(value)}.`, name);
+    }
+  }
+}
+
+function ratio(effect: number, resistance: number): number {
+  if (effect === 0) return 0;
+  return resistance > 0 ? effect / resistance : Number.POSITIVE_INFINITY;
+}
+
+/** Everything the individual checks share: strengths, class and resistances. */
+interface Resistances {
+  yieldStrength: number;
+  gammaM0: number;
+  /** f_y / gamma_M0 */
+  designStrength: number;
+  epsilon: number;
+  sectionClass: SectionClass;
+  axialResistance: number;
+  momentResistanceY: number;
+  momentResistanceZ: number;
+  shearAreaZ: number;
+  shearAreaY: number;
+  shearResistanceZ: number;
+  shearResistanceY: number;
+  torsionShearStress: number;
+  torsionReduction: number;
+  shearTorsionResistanceZ: number;
+  shearTorsionResistanceY: number;
+  rhoZ: number;
+  rhoY: number;
+  momentShearResistanceY: number;
+  momentShearResistanceZ: number;
+  warpingNormalStress: number;
+  classMessage: string | undefined;
+}
+
+/** rho of EN 1993-1-1 6.2.8(3)/(4): (2 V_Ed / V_Rd - 1)^2 when V_Ed > 0.5 V_Rd, else 0. */
+function shearReductionFactor(shearForce: number, shearResistance: number): number {
+  const v = Math.abs(shearForce);
+  if (v === 0) return 0;
+  if (shearResistance <= 0) return 1;
+  if (v <= 0.5 * shearResistance) return 0;
+  return Math.min(1, (2 * v / shearResistance - 1) ** 2);
+}
+
+function resistances(section: CheckableSection, grade: SteelGrade, forces: InternalForces, options: CheckOptions): Resistances {
+  const { properties: p } = section;
+  const { depth: h, flangeWidth: b, webThickness: tw, flangeThickness: tf } = section.dimensions;
+  const eta = options.eta ?? 1.0;
+  if (!Number.isFinite(eta) || eta < 1 || eta > 1.2) {
+    throw new SteelError('INVALID_OPTIONS', `eta must lie between 1.0 and 1.2 (EN 1993-1-5 5.1); got ${eta}.`, 'eta');
+  }
+  const classification = classifySection(section, grade, { N: forces.N, My: forces.My });
+  const combined = classification.combined;
+  const flangeCompressed = forces.N < 0 || forces.My !== 0 || forces.Mz !== 0 || forces.B !== 0;
+  const sectionClass: SectionClass = Math.max(
+    combined ? combined.web.sectionClass : 1,
+    flangeCompressed ? classification.flange.sectionClass : 1,
+  ) as SectionClass;
+  const yieldStrength = classification.yieldStrength;
+  const gammaM0 = grade.gammaM0;
+  const designStrength = yieldStrength / gammaM0;
+  const plastic = sectionClass <= 2;
+
+  // EN 1993-1-1 6.2.3(2)a and 6.2.4(2): N_pl,Rd = N_c,Rd = A f_y / gamma_M0 (gross section, no holes).
+  const axialResistance = p.area * designStrength;
+  // EN 1993-1-1 6.2.5(2): M_c,Rd = W_pl f_y / gamma_M0 (class 1, 2) or W_el,min f_y / gamma_M0 (class 3).
+  const momentResistanceY = (plastic ? p.plasticModulusY : p.elasticModulusY) * designStrength;
+  const momentResistanceZ = (plastic ? p.plasticModulusZ : p.elasticModulusZ) * designStrength;
+
+  // EN 1993-1-1 6.2.6(2): V_pl,Rd = A_v (f_y / sqrt 3) / gamma_M0.
+  const shearAreaZ = shearAreaParallelToWeb(section.dimensions, eta);
+  const shearAreaY = p.shearAreaY;
+  const shearStrength = designStrength / Math.sqrt(3);
+  const shearResistanceZ = shearAreaZ * shearStrength;
+  const shearResistanceY = shearAreaY * shearStrength;
+
+  // EN 1993-1-1 6.2.7(9), I or H section: V_pl,T,Rd = sqrt(1 - tau_t,Ed / (1.25 (f_y / sqrt 3) / gamma_M0)) V_pl,Rd,
+  // with tau_t,Ed = T_sv t_max / I_t, the largest St Venant shear stress of the section.
+  const torsionShearStress = (Math.abs(forces.Tsv) * Math.max(tf, tw)) / p.torsionConstant;
+  const torsionReduction = Math.sqrt(Math.max(0, 1 - torsionShearStress / (1.25 * shearStrength)));
+  const shearTorsionResistanceZ = torsionReduction * shearResistanceZ;
+  const shearTorsionResistanceY = torsionReduction * shearResistanceY;
+
+  // EN 1993-1-1 6.2.8: high shear reduces the yield strength of the shear area by (1 - rho).
+  const rhoZ = shearReductionFactor(forces.Vz, shearTorsionResistanceZ);
+  const rhoY = shearReductionFactor(forces.Vy, shearTorsionResistanceY);
+  const webArea = p.webDepth * tw;
+  // 6.2.8(5), I section with equal flanges, strong axis: M_y,V,Rd = (W_pl,y - rho A_w^2 / (4 t_w)) f_y / gamma_M0.
+  // For class 3 the same reduction is applied to the web's elastic modulus t_w h_w^3 / (6 h).
+  const momentShearResistanceY = Math.min(
+    momentResistanceY,
+    Math.max(0, (plastic ? p.plasticModulusY - (rhoZ * webArea * webArea) / (4 * tw) : p.elasticModulusY - (rhoZ * tw * p.webDepth ** 3) / (6 * h)) * designStrength),
+  );
+  // Weak axis: the shear area is the flanges, which give W_pl,z ~ t_f b^2 / 2 (W_el,z ~ t_f b^2 / 3).
+  const momentShearResistanceZ = Math.min(
+    momentResistanceZ,
+    Math.max(0, (plastic ? p.plasticModulusZ - (rhoY * tf * b * b) / 2 : p.elasticModulusZ - (rhoY * tf * b * b) / 3) * designStrength),
+  );
+
+  const warpingNormalStress = (Math.abs(forces.B) * p.sectorialModulus) / p.warpingConstant;
+  const name = section.designation ?? 'section';
+  const classMessage =
+    sectionClass === 4
+      ? `${name} is class 4 under these forces (EN 1993-1-1 Table 5.2: flange c/t = ${classification.flange.slenderness.toFixed(1)}, web c/t = ${(combined?.web.slenderness ?? 0).toFixed(1)}, eps = ${classification.epsilon.toFixed(3)}); effective widths per EN 1993-1-5 are outside the scope of these checks.`
+      : undefined;
+
+  return {
+    yieldStrength,
+    gammaM0,
+    designStrength,
+    epsilon: classification.epsilon,
+    sectionClass,
+    axialResistance,
+    momentResistanceY,
+    momentResistanceZ,
+    shearAreaZ,
+    shearAreaY,
+    shearResistanceZ,
+    shearResistanceY,
+    torsionShearStress,
+    torsionReduction,
+    shearTorsionResistanceZ,
+    shearTorsionResistanceY,
+    rhoZ,
+    rhoY,
+    momentShearResistanceY,
+    momentShearResistanceZ,
+    warpingNormalStress,
+    classMessage,
+  };
+}
+
+function outOfScope(result: CheckResult, message: string | undefined): CheckResult {
+  if (message === undefined || result.utilisation === 0) return result;
+  return { ...result, utilisation: Number.POSITIVE_INFINITY, outOfScope: message };
+}
+
+function axialCheck(section: CheckableSection, forces: InternalForces, r: Resistances): CheckResult {
+  const tension = forces.N >= 0;
+  const result: CheckResult = {
+    id: 'axial',
+    title: tension ? 'Axial tension' : 'Axial compression (cross-section)',
+    clause: tension ? 'EN 1993-1-1 6.2.3' : 'EN 1993-1-1 6.2.4',
+    utilisation: ratio(Math.abs(forces.N), r.axialResistance),
+    inputs: { N: forces.N, A: section.properties.area, f_y: r.yieldStrength, gamma_M0: r.gammaM0 },
+    intermediate: { N_Rd: r.axialResistance, sectionClass: r.sectionClass },
+  };
+  return tension ? result : outOfScope(result, r.classMessage);
+}
+
+function bendingCheck(section: CheckableSection, forces: InternalForces, r: Resistances, axis: 'y' | 'z'): CheckResult {
+  const p = section.properties;
+  const moment = axis === 'y' ? forces.My : forces.Mz;
+  const shear = axis === 'y' ? forces.Vz : forces.Vy;
+  const resistance = axis === 'y' ? r.momentShearResistanceY : r.momentShearResistanceZ;
+  const result: CheckResult = {
+    id: `bending-${axis}`,
+    title: axis === 'y' ? 'Bending about the strong axis (with shear)' : 'Bending about the weak axis (with shear)',
+    clause: 'EN 1993-1-1 6.2.5, 6.2.8',
+    utilisation: ratio(Math.abs(moment), resistance),
+    inputs: {
+      [`M${axis}`]: moment,
+      [`V${axis === 'y' ? 'z' : 'y'}`]: shear,
+      [`W_pl,${axis}`]: axis === 'y' ? p.plasticModulusY : p.plasticModulusZ,
+      [`W_el,${axis}`]: axis === 'y' ? p.elasticModulusY : p.elasticModulusZ,
+      f_y: r.yieldStrength,
+      gamma_M0: r.gammaM0,
+    },
+    intermediate: {
+      sectionClass: r.sectionClass,
+      [`M_c,${axis},Rd`]: axis === 'y' ? r.momentResistanceY : r.momentResistanceZ,
+      rho: axis === 'y' ? r.rhoZ : r.rhoY,
+      [`M_${axis},V,Rd`]: resistance,
+    },
+  };
+  return outOfScope(result, r.classMessage);
+}
+
+function shearCheck(section: CheckableSection, forces: InternalForces, r: Resistances, direction: 'y' | 'z', eta: number): CheckResult {
+  const shear = direction === 'z' ? forces.Vz : forces.Vy;
+  const resistance = direction === 'z' ? r.shearTorsionResistanceZ : r.shearTorsionResistanceY;
+  const result: CheckResult = {
+    id: `shear-${direction}`,
+    title: direction === 'z' ? 'Shear parallel to the web (with St Venant torsion)' : 'Shear parallel to the flanges (with St Venant torsion)',
+    clause: 'EN 1993-1-1 6.2.6, 6.2.7(9)',
+    utilisation: ratio(Math.abs(shear), resistance),
+    inputs: {
+      [`V${direction}`]: shear,
+      Tsv: forces.Tsv,
+      A_v: direction === 'z' ? r.shearAreaZ : r.shearAreaY,
+      I_t: section.properties.torsionConstant,
+      f_y: r.yieldStrength,
+      gamma_M0: r.gammaM0,
+    },
+    intermediate: {
+      V_pl_Rd: direction === 'z' ? r.shearResistanceZ : r.shearResistanceY,
+      tau_t_Ed: r.torsionShearStress,
+      torsionReduction: r.torsionReduction,
+      V_pl_T_Rd: resistance,
+    },
+  };
+  if (direction === 'z') {
+    // EN 1993-1-1 6.2.6(6): webs with h_w / t_w > 72 eps / eta need the shear buckling check of EN 1993-1-5.
+    const webSlenderness = section.properties.webDepth / section.dimensions.webThickness;
+    const limit = (72 * r.epsilon) / eta;
+    result.intermediate['h_w/t_w'] = webSlenderness;
+    result.intermediate['72eps/eta'] = limit;
+    if (webSlenderness > limit) {
+      return outOfScope(
+        result,
+        `Web slenderness h_w/t_w = ${webSlenderness.toFixed(1)} exceeds 72 eps/eta = ${limit.toFixed(1)}: shear buckling per EN 1993-1-5 is outside the scope of these checks.`,
+      );
+    }
+  }
+  return result;
+}
+
+/** St Venant and warping stresses of an open doubly symmetric I section. */
+function torsionStresses(section: CheckableSection, forces: InternalForces): { flangeStVenant: number; webStVenant: number; warpingShear: number; warpingNormal: number } {
+  const p = section.properties;
+  const { webThickness: tw, flangeThickness: tf } = section.dimensions;
+  return {
+    // tau_t = T_sv t / I_t at the surface of each plate
+    flangeStVenant: (Math.abs(forces.Tsv) * tf) / p.torsionConstant,
+    webStVenant: (Math.abs(forces.Tsv) * tw) / p.torsionConstant,
+    // tau_w = T_w S_w / (I_w t_f), largest in the flange at the web
+    warpingShear: (Math.abs(forces.Tw) * p.warpingStaticMoment) / (p.warpingConstant * tf),
+    // sigma_w = B W_n0 / I_w at the flange tips
+    warpingNormal: (Math.abs(forces.B) * p.sectorialModulus) / p.warpingConstant,
+  };
+}
+
+function torsionCheck(section: CheckableSection, forces: InternalForces, r: Resistances): CheckResult {
+  const p = section.properties;
+  const s = torsionStresses(section, forces);
+  const shearStrength = r.designStrength / Math.sqrt(3);
+  const flangeShear = s.flangeStVenant + s.warpingShear;
+  const utilisation = Math.max(
+    ratio(flangeShear, shearStrength),
+    ratio(s.webStVenant, shearStrength),
+    ratio(s.warpingNormal, r.designStrength),
+  );
+  return {
+    id: 'torsion',
+    title: 'Torsion: St Venant and warping stresses',
+    clause: 'EN 1993-1-1 6.2.7',
+    utilisation,
+    inputs: {
+      Tsv: forces.Tsv,
+      Tw: forces.Tw,
+      B: forces.B,
+      I_t: p.torsionConstant,
+      I_w: p.warpingConstant,
+      W_n0: p.sectorialModulus,
+      S_w: p.warpingStaticMoment,
+      f_y: r.yieldStrength,
+      gamma_M0: r.gammaM0,
+    },
+    intermediate: {
+      tau_t_flange: s.flangeStVenant,
+      tau_t_web: s.webStVenant,
+      tau_w_flange: s.warpingShear,
+      sigma_w: s.warpingNormal,
+      tau_Rd: shearStrength,
+      sigma_Rd: r.designStrength,
+    },
+  };
+}
+
+/** A point of the cross-section where the yield criterion is evaluated. */
+interface StressPoint {
+  name: string;
+  sigma: number;
+  tau: number;
+}
+
+/**
+ * Elastic stresses at the critical points of the section. Normal stress from N, My, Mz and B with the
+ * sign conventions of InternalForces; shear stresses from Vy, Vz (tau = V S / (I t)), St Venant torsion
+ * (T_sv t / I_t) and warping torsion (T_w S_w / (I_w t_f)). Shear parts that may act in either sense
+ * at a point are added by magnitude, which is conservative.
+ */
+function stressPoints(section: CheckableSection, forces: InternalForces): StressPoint[] {
+  const p = section.properties;
+  const { depth: h, flangeWidth: b, webThickness: tw, flangeThickness: tf, rootRadius: r } = section.dimensions;
+  const h0 = p.flangeCentroidDistance;
+  const hw = p.webDepth;
+  const t = torsionStresses(section, forces);
+  const sigmaAt = (y: number, z: number, omega: number): number =>
+    forces.N / p.area + (forces.My * z) / p.secondMomentOfAreaY - (forces.Mz * y) / p.secondMomentOfAreaZ + (forces.B * omega) / p.warpingConstant;
+
+  // First moments of area about y: one flange (at the web-flange junction) and half the section (at mid-depth).
+  const fillet = filletGeometry(r);
+  const flangeFirstMoment = (b * tf * h0) / 2;
+  const halfFirstMoment = flangeFirstMoment + (tw * (hw / 2) ** 2) / 2 + 2 * fillet.area * (h / 2 - tf - fillet.centroidOffset);
+  const webShearAtJunction = (Math.abs(forces.Vz) * flangeFirstMoment) / (p.secondMomentOfAreaY * tw);
+  const webShearAtCentre = (Math.abs(forces.Vz) * halfFirstMoment) / (p.secondMomentOfAreaY * tw);
+  // Flange shear at the web: from Vz (flow turning into the web), from Vy (parabolic across each flange).
+  const flangeShearFromVz = (Math.abs(forces.Vz) * (b / 2) * (h0 / 2)) / p.secondMomentOfAreaY;
+  const flangeShearFromVy = (Math.abs(forces.Vy) * ((tf * b * b) / 8)) / (p.secondMomentOfAreaZ * tf);
+
+  const points: StressPoint[] = [];
+  for (const zSign of [1, -1]) {
+    const side = zSign > 0 ? '+z' : '-z';
+    for (const ySign of [1, -1]) {
+      points.push({
+        name: `flange tip ${ySign > 0 ? '+y' : '-y'} ${side}`,
+        sigma: sigmaAt((ySign * b) / 2, (zSign * h) / 2, ((ySign * b) / 2) * ((zSign * h0) / 2)),
+        tau: t.flangeStVenant,
+      });
+    }
+    points.push({
+      name: `flange at web ${side}`,
+      sigma: sigmaAt(0, (zSign * h) / 2, 0),
+      tau: t.flangeStVenant + t.warpingShear + flangeShearFromVy + flangeShearFromVz,
+    });
+    points.push({
+      name: `web at flange junction ${side}`,
+      sigma: sigmaAt(0, (zSign * hw) / 2, 0),
+      tau: webShearAtJunction + t.webStVenant,
+    });
+  }
+  points.push({ name: 'web at mid-depth', sigma: sigmaAt(0, 0, 0), tau: webShearAtCentre + t.webStVenant });
+  return points;
+}
+
+function yieldCriterionCheck(section: CheckableSection, forces: InternalForces, r: Resistances): CheckResult {
+  const f = r.designStrength;
+  const points = stressPoints(section, forces);
+  const intermediate: Record<string, number> = {};
+  let worstCriterion = 0;
+  let worstIndex = 0;
+  points.forEach((point, index) => {
+    // EN 1993-1-1 6.2.1(5) with sigma_z,Ed = 0: (sigma_x / f)^2 + 3 (tau / f)^2 <= 1, f = f_y / gamma_M0.
+    const criterion = (point.sigma / f) ** 2 + 3 * (point.tau / f) ** 2;
+    intermediate[`sigma_x ${point.name}`] = point.sigma;
+    intermediate[`tau ${point.name}`] = point.tau;
+    if (criterion > worstCriterion) {
+      worstCriterion = criterion;
+      worstIndex = index;
+    }
+  });
+  intermediate['criterion'] = worstCriterion;
+  intermediate['governingPoint'] = worstIndex;
+  const result: CheckResult = {
+    id: 'yield-criterion',
+    title: `Yield criterion at the critical points (governing: ${points[worstIndex]?.name ?? 'none'})`,
+    clause: 'EN 1993-1-1 6.2.1(5)',
+    utilisation: Math.sqrt(worstCriterion),
+    inputs: { ...forces, f_y: r.yieldStrength, gamma_M0: r.gammaM0 },
+    intermediate,
+  };
+  return outOfScope(result, r.classMessage);
+}
+
+function interactionCheck(forces: InternalForces, r: Resistances): CheckResult {
+  // EN 1993-1-1 6.2.1(7): N_Ed/N_Rd + M_y,Ed/M_y,Rd + M_z,Ed/M_z,Rd <= 1, here with the warping normal
+  // stress of the bimoment added as a fourth term sigma_w / (f_y / gamma_M0), and the moment
+  // resistances reduced for shear per 6.2.8.
+  const axialTerm = ratio(Math.abs(forces.N), r.axialResistance);
+  const bendingYTerm = ratio(Math.abs(forces.My), r.momentShearResistanceY);
+  const bendingZTerm = ratio(Math.abs(forces.Mz), r.momentShearResistanceZ);
+  const bimomentTerm = ratio(r.warpingNormalStress, r.designStrength);
+  const result: CheckResult = {
+    id: 'interaction',
+    title: 'Axial force, biaxial bending and bimoment (linear interaction)',
+    clause: 'EN 1993-1-1 6.2.1(7)',
+    utilisation: axialTerm + bendingYTerm + bendingZTerm + bimomentTerm,
+    inputs: { N: forces.N, My: forces.My, Mz: forces.Mz, B: forces.B, f_y: r.yieldStrength, gamma_M0: r.gammaM0 },
+    intermediate: {
+      sectionClass: r.sectionClass,
+      N_Rd: r.axialResistance,
+      M_y_Rd: r.momentShearResistanceY,
+      M_z_Rd: r.momentShearResistanceZ,
+      sigma_w: r.warpingNormalStress,
+      axialTerm,
+      bendingYTerm,
+      bendingZTerm,
+      bimomentTerm,
+    },
+  };
+  return outOfScope(result, r.classMessage);
+}
+
+/**
+ * Cross-section resistance checks of EN 1993-1-1 6.2 for one set of internal forces. The section class
+ * is found for the actual N and M_y (Table 5.2, web in bending and compression); class 4 sections get
+ * `outOfScope` and utilisation Infinity on the checks that involve normal stress.
+ */
+export function checkSection(section: CheckableSection, grade: SteelGrade, forces: InternalForces, options: CheckOptions = {}): CheckResult[] {
+  checkForces(forces);
+  const r = resistances(section, grade, forces, options);
+  const eta = options.eta ?? 1.0;
+  return [
+    axialCheck(section, forces, r),
+    bendingCheck(section, forces, r, 'y'),
+    bendingCheck(section, forces, r, 'z'),
+    shearCheck(section, forces, r, 'z', eta),
+    shearCheck(section, forces, r, 'y', eta),
+    torsionCheck(section, forces, r),
+    yieldCriterionCheck(section, forces, r),
+    interactionCheck(forces, r),
+  ];
+}
+
+/** The check with the largest utilisation (the first of equals); undefined for an empty list. */
+export function governingCheck(results: readonly CheckResult[]): CheckResult | undefined {
+  let governing: CheckResult | undefined;
+  for (const result of results) {
+    if (governing === undefined || result.utilisation > governing.utilisation) governing = result;
+  }
+  return governing;
+}

@@ -1,0 +1,121 @@
+import { z } from 'zod';
+import rolledSectionTable from './data/rolled-sections.json' with { type: 'json' };
+import { SteelError } from './errors.js';
+import { sectionProperties } from './properties.js';
+import type { ISectionDimensions, SectionProperties } from './properties.js';
+
+export type SectionSeries = 'IPE' | 'HE B';
+
+/** A rolled section ready for design: SI dimensions, computed properties and where the row came from. */
+export interface SteelSection {
+  /** e.g. "IPE 300", "HE 300 B" */
+  designation: string;
+  series: SectionSeries;
+  dimensions: ISectionDimensions;
+  properties: SectionProperties;
+  /** provenance of the dimensions */
+  source: string;
+}
+
+const positiveMm = z.number().finite().positive();
+
+const rolledSectionRow = z
+  .object({
+    designation: z.string().regex(/^(IPE \d+|HE \d+ B)$/, 'designation must read like "IPE 300" or "HE 300 B"'),
+    series: z.enum(['IPE', 'HE B']),
+    depthMm: positiveMm,
+    flangeWidthMm: positiveMm,
+    webThicknessMm: positiveMm,
+    flangeThicknessMm: positiveMm,
+    rootRadiusMm: z.number().finite().nonnegative(),
+    source: z.string().min(1),
+  })
+  .strict()
+  .refine((row) => row.designation.startsWith(row.series === 'IPE' ? 'IPE ' : 'HE '), {
+    message: 'designation does not belong to the stated series',
+  })
+  .refine((row) => row.depthMm - 2 * row.flangeThicknessMm - 2 * row.rootRadiusMm > 0, {
+    message: 'depth leaves no straight web between flanges and root fillets',
+  })
+  .refine((row) => row.webThicknessMm + 2 * row.rootRadiusMm < row.flangeWidthMm, {
+    message: 'flange width leaves no outstand beyond web and root fillets',
+  });
+
+const rolledSectionFile = z
+  .object({
+    schemaVersion: z.literal(1),
+    title: z.string(),
+    units: z.literal('mm'),
+    sections: z.array(rolledSectionRow).min(1),
+  })
+  .strict()
+  .refine((file) => new Set(file.sections.map((row) => row.designation)).size === file.sections.length, {
+    message: 'designations must be unique',
+  });
+
+const metresPerMm = 1e-3;
+
+/** Validate a section table (the shape of src/data/rolled-sections.json) and convert it to SI. */
+export function parseRolledSectionTable(data: unknown): SteelSection[] {
+  const parsed = rolledSectionFile.safeParse(data);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    const path = issue ? issue.path.join('.') : '';
+    throw new SteelError(
+      'INVALID_SECTION_TABLE',
+      `The rolled-section table is invalid at "${path}": ${issue?.message ?? 'unknown problem'}.`,
+      path,
+    );
+  }
+  return parsed.data.sections.map((row) => {
+    const dimensions: ISectionDimensions = {
+      depth: row.depthMm * metresPerMm,
+      flangeWidth: row.flangeWidthMm * metresPerMm,
+      webThickness: row.webThicknessMm * metresPerMm,
+      flangeThickness: row.flangeThicknessMm * metresPerMm,
+      rootRadius: row.rootRadiusMm * metresPerMm,
+    };
+    return {
+      designation: row.designation,
+      series: row.series,
+      dimensions,
+      properties: sectionProperties(dimensions),
+      source: row.source,
+    };
+  });
+}
+
+let cachedSections: readonly SteelSection[] | undefined;
+
+/** The EN 10365 IPE and HE B sections shipped with the package, lightest first within each series. */
+export function loadRolledSections(): SteelSection[] {
+  cachedSections ??= Object.freeze(
+    parseRolledSectionTable(rolledSectionTable).map((section) =>
+      Object.freeze({
+        ...section,
+        dimensions: Object.freeze(section.dimensions),
+        properties: Object.freeze(section.properties),
+      }),
+    ),
+  );
+  // A fresh array of shared rows: callers may sort or filter without affecting each other.
+  return [...cachedSections];
+}
+
+function normaliseDesignation(name: string): string {
+  return name.toUpperCase().replace(/\s+/g, '');
+}
+
+/** Look a section up by designation; spacing and case are ignored ("HE300B" finds "HE 300 B"). */
+export function rolledSection(designation: string): SteelSection {
+  const wanted = normaliseDesignation(designation);
+  const found = loadRolledSections().find((s) => normaliseDesignation(s.designation) === wanted);
+  if (!found) {
+    throw new SteelError(
+      'UNKNOWN_SECTION',
+      `Section "${designation}" is not in the rolled-section table (IPE 80 to IPE 600, HE 100 B to HE 1000 B).`,
+      'section',
+    );
+  }
+  return found;
+}
