@@ -106,10 +106,21 @@ describe('binsupport design on the demo bin', () => {
     expect(readdirSync(out).filter((name) => name.startsWith('page') && name.endsWith('.png')).length).toBe(pdf.numPages);
   });
 
-  it('the girder model file holds the analysed model', () => {
-    const model = JSON.parse(readFileSync(join(out, 'model-columns-under-web.json'), 'utf8')) as { nodes: unknown[]; elements: unknown[]; supports: unknown[] };
+  it('the girder model file holds the analysed model, and `analyse` reproduces the design analysis', () => {
+    const modelPath = join(out, 'model-columns-under-web.json');
+    const model = JSON.parse(readFileSync(modelPath, 'utf8')) as { kind: string; nodes: unknown[]; elements: unknown[]; supports: unknown[] };
+    expect(model.kind).toBe('girder-model');
     expect(model.elements.length).toBe(8 * 24);
     expect(model.supports.length).toBe(8);
+    const rerun = spawnSync(process.execPath, [launcher, 'analyse', modelPath, '--json'], { encoding: 'utf8', maxBuffer: 256 * 1024 * 1024 });
+    expect(rerun.status).toBe(0);
+    const analyses = (JSON.parse(rerun.stdout) as { analyses: Array<{ combination: string; reactionSum: number[]; stations: Array<{ My: number; T: number }> }> }).analyses;
+    for (const analysis of design.analyses) {
+      const again = analyses.find((candidate) => candidate.combination === analysis.combination);
+      expect(again?.reactionSum).toEqual(analysis.reactionSum);
+      const peakMy = Math.max(...(again?.stations ?? []).map((station) => Math.abs(station.My)));
+      expect(peakMy).toBe((design as unknown as { analyses: Array<{ peaks: { My: number } }> }).analyses[design.analyses.indexOf(analysis)]?.peaks.My);
+    }
   });
 });
 

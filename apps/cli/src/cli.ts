@@ -1,9 +1,9 @@
 import { mkdir } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
-import { designFromSpec, DesignError, stableJson } from '@binsupport/design';
+import { analyseModelFile, designFromSpec, DesignError, stableJson, type ModelFileResult } from '@binsupport/design';
 import { atomicWrite, writeDesignPdf, writeDesignXlsx } from '@binsupport/deliverables';
-import { readSpecFile, SpecError } from '@binsupport/spec';
+import { readGirderModelFile, readSpecFile, SpecError } from '@binsupport/spec';
 import { version } from './version.js';
 
 export interface CliStreams {
@@ -20,6 +20,7 @@ const mainHelp = `binsupport ${version}: design of the support girders of steel 
 
 Usage:
   binsupport design <spec.yaml|spec.json> --out <folder>   design a bin's support girder
+  binsupport analyse <model.json|model.yaml> [--json]      re-run one girder model (as written by design)
   binsupport --help | --version
 
 Run 'binsupport design --help' for the inputs and outputs of a design.
@@ -45,6 +46,20 @@ Options:
 
 Exit codes: 0 designed and verified; 1 no adequate design (the best attempt is still written and
 reported) or an analysis that refused to give an answer; 2 bad input (the message names the input).
+`;
+
+const analyseHelp = `Usage: binsupport analyse <model> [--json] [--combination NAME]
+
+Re-runs the analysis of a girder-model file (docs/girder-model.md) such as the model-<scenario>.json
+that 'design' writes, for every combination in it or only the one named.
+
+Options:
+  --json                 print the full results (stations, reactions, springs, contact state) as JSON
+  --combination NAME     analyse only this combination
+  --help                 this text
+
+Without --json a summary per combination is printed. Units: SI (N, m, rad).
+Exit codes: 0 analysed; 1 the analysis refused (mechanism, no convergence); 2 bad input.
 `;
 
 function fail(streams: CliStreams, code: number, message: string): number {
@@ -99,6 +114,38 @@ async function runDesign(args: string[], streams: CliStreams): Promise<number> {
   }
 }
 
+function summaryLine(analysis: ModelFileResult['analyses'][number]): string {
+  const peak = (key: 'N' | 'Vz' | 'T' | 'My' | 'B') => Math.max(...analysis.stations.map((station) => Math.abs(station[key])));
+  const sums = analysis.reactionSum.map((value) => value.toExponential(4)).join(', ');
+  return `${analysis.combination}: converged ${analysis.converged ? 'yes' : 'no'} in ${analysis.iterations} iteration(s), residual ${analysis.residual.toExponential(2)}, reactions [${sums}] N; peaks |N| ${peak('N').toExponential(4)} N, |Vz| ${peak('Vz').toExponential(4)} N, |T| ${peak('T').toExponential(4)} N m, |My| ${peak('My').toExponential(4)} N m, |B| ${peak('B').toExponential(4)} N m2\n`;
+}
+
+async function runAnalyse(args: string[], streams: CliStreams): Promise<number> {
+  let parsed;
+  try {
+    parsed = parseArgs({ args, allowPositionals: true, options: { json: { type: 'boolean' }, combination: { type: 'string' }, help: { type: 'boolean' } } });
+  } catch (error) {
+    return fail(streams, EXIT_BAD_INPUT, `${(error as Error).message}\n\n${analyseHelp}`);
+  }
+  if (parsed.values.help) {
+    streams.stdout.write(analyseHelp);
+    return EXIT_OK;
+  }
+  const [modelPath, ...extra] = parsed.positionals;
+  if (!modelPath || extra.length > 0) return fail(streams, EXIT_BAD_INPUT, `analyse takes exactly one model file\n\n${analyseHelp}`);
+  try {
+    const file = await readGirderModelFile(modelPath);
+    const result = analyseModelFile(file, parsed.values.combination);
+    if (parsed.values.json) streams.stdout.write(stableJson(result));
+    else for (const analysis of result.analyses) streams.stdout.write(summaryLine(analysis));
+    return EXIT_OK;
+  } catch (error) {
+    if (error instanceof SpecError) return fail(streams, EXIT_BAD_INPUT, error.message);
+    if (error instanceof DesignError) return fail(streams, error.code === 'BAD_INPUT' ? EXIT_BAD_INPUT : EXIT_NOT_SATISFIED, `${error.message}${error.path ? ` (at ${error.path})` : ''}`);
+    throw error;
+  }
+}
+
 export async function runCli(argv: string[], streams: CliStreams): Promise<number> {
   const [command, ...rest] = argv;
   if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
@@ -110,5 +157,6 @@ export async function runCli(argv: string[], streams: CliStreams): Promise<numbe
     return EXIT_OK;
   }
   if (command === 'design') return runDesign(rest, streams);
+  if (command === 'analyse') return runAnalyse(rest, streams);
   return fail(streams, EXIT_BAD_INPUT, `unknown command '${command}'\n\n${mainHelp}`);
 }

@@ -8,6 +8,7 @@ import { envelopeChecks, governingEnvelope, maxUtilisation, type CheckEnvelope, 
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
 import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
 import { COLUMNS_UNDER_WEB } from './scenarios.js';
+import { girderModelDocument, type GirderModelDocument } from './model-file.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
 
 export const CAUTIONS = [
@@ -26,8 +27,8 @@ export interface DesignOptions {
 
 export interface DesignOutcome {
   result: DesignResult;
-  /** The girder model built for each support scenario, with the final sections. */
-  models: Array<{ scenario: string; model: GirderModel }>;
+  /** The girder-model file of each support scenario, with the final sections (for `analyse`). */
+  models: Array<{ scenario: string; model: GirderModelDocument }>;
 }
 
 export const familyToSeries: Record<BinSpec['support']['sectionFamilies'][number], SteelSection['series']> = { IPE: 'IPE', HEB: 'HE B' };
@@ -297,7 +298,8 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     totals: { steelMass: member.mass },
   };
   progress(message);
-  return { result, models: [{ scenario: COLUMNS_UNDER_WEB.id, model: final.model }] };
+  const combinations = loads.combinations.map((combination) => ({ name: combination.name, factors: combination.factors }));
+  return { result, models: [{ scenario: COLUMNS_UNDER_WEB.id, model: girderModelDocument(final.model, COLUMNS_UNDER_WEB.id, `${member.description}; section ${member.section} ${member.grade}; ${COLUMNS_UNDER_WEB.title}`, combinations) }] };
 }
 
 function finiteOrNull(value: number): number | null {

@@ -4,3 +4,4 @@ export { DesignError, type DesignErrorCode } from './errors.js';
 export { stableJson } from './json.js';
 export { buildRingModel, type RingLayout, type RingModelInput } from './ring.js';
 export { TOOL_NAME, TOOL_VERSION } from './version.js';
+export { analyseModelFile, girderModelDocument, GIRDER_MODEL_SCHEMA_VERSION, type GirderModelDocument, type ModelFileResult } from './model-file.js';

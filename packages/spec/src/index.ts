@@ -1,6 +1,7 @@
 export { SpecError, type SpecErrorCode, type SpecIssue } from './errors.js';
 export { binSpecInput, steelGrades, sectionFamilies, wallSurfaceCategories, type BinSpecInput, type BinSpecParsed } from './schema.js';
 export { normaliseSpec, STEEL_DENSITY, type BinSpec } from './spec.js';
-export { readSpecFile, parseSpecText, specFormatOf, MAX_SPEC_BYTES, type SpecFormat } from './read.js';
+export { readSpecFile, readDocumentFile, readGirderModelFile, parseSpecText, specFormatOf, MAX_SPEC_BYTES, type SpecFormat } from './read.js';
 export { storedSolidTable, resolveStoredSolid, type StoredSolid, type StoredSolidRow, type WallSurfaceCategory, type SolidOverrides } from './solids.js';
 export { mmToM, degToRad, knPerM3ToNPerM3 } from './units.js';
+export { girderModelFile, parseGirderModelFile, type GirderModelFile, type GirderModelFileSection } from './girder-model.js';

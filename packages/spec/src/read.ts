@@ -3,6 +3,7 @@ import { extname } from 'node:path';
 import { parse as parseYaml, YAMLParseError } from 'yaml';
 import { SpecError } from './errors.js';
 import { normaliseSpec, type BinSpec } from './spec.js';
+import { parseGirderModelFile, type GirderModelFile } from './girder-model.js';
 
 /** Largest spec file read, bytes: a spec sheet is a few kB; anything larger is not a spec. */
 export const MAX_SPEC_BYTES = 1_000_000;
@@ -13,7 +14,7 @@ export function specFormatOf(path: string): SpecFormat {
   const extension = extname(path).toLowerCase();
   if (extension === '.yaml' || extension === '.yml') return 'yaml';
   if (extension === '.json') return 'json';
-  throw new SpecError('UNSUPPORTED_FORMAT', [{ path, message: `${path}: a spec must be a .yaml, .yml or .json file; got '${extension || 'no extension'}'` }]);
+  throw new SpecError('UNSUPPORTED_FORMAT', [{ path, message: `${path}: an input file must be .yaml, .yml or .json; got '${extension || 'no extension'}'` }]);
 }
 
 /** Parse spec text of a known format into a plain document (no validation yet). */
@@ -34,8 +35,8 @@ export function parseSpecText(textContent: string, format: SpecFormat, source = 
   }
 }
 
-/** Read, parse, validate and convert a spec file. */
-export async function readSpecFile(path: string): Promise<BinSpec> {
+/** Read and parse a YAML or JSON input file of at most MAX_SPEC_BYTES (no validation yet). */
+export async function readDocumentFile(path: string): Promise<unknown> {
   const format = specFormatOf(path);
   let size: number;
   try {
@@ -47,5 +48,15 @@ export async function readSpecFile(path: string): Promise<BinSpec> {
     throw new SpecError('UNREADABLE_FILE', [{ path, message: `${path}: a spec file must be at most ${MAX_SPEC_BYTES} bytes; got ${size}` }]);
   }
   const content = await readFile(path, 'utf8');
-  return normaliseSpec(parseSpecText(content, format, path));
+  return parseSpecText(content, format, path);
+}
+
+/** Read, parse, validate and convert a spec file. */
+export async function readSpecFile(path: string): Promise<BinSpec> {
+  return normaliseSpec(await readDocumentFile(path));
+}
+
+/** Read and validate a girder-model file (for re-running one analysis). */
+export async function readGirderModelFile(path: string): Promise<GirderModelFile> {
+  return parseGirderModelFile(await readDocumentFile(path), path);
 }

@@ -1,5 +1,5 @@
-import type { z } from 'zod';
 import { SpecError, type SpecIssue } from './errors.js';
+import { zodIssues } from './issues.js';
 import { binSpecInput, type BinSpecParsed } from './schema.js';
 import { resolveStoredSolid, type StoredSolid } from './solids.js';
 import { degToRad, knPerM3ToNPerM3, mmToM } from './units.js';
@@ -33,32 +33,6 @@ export interface BinSpec {
     sectionFamilies: Array<'IPE' | 'HEB'>;
   };
   actions: { permanentFactor: number; solidFactor: number };
-}
-
-function issuePath(path: ReadonlyArray<PropertyKey>): string {
-  return path.map((part) => (typeof part === 'number' ? `[${part}]` : String(part))).join('.').replace(/\.\[/g, '[');
-}
-
-function describeInput(input: unknown): string {
-  if (input === undefined) return 'nothing';
-  if (typeof input === 'string') return `'${input.length > 40 ? `${input.slice(0, 40)}…` : input}'`;
-  if (typeof input === 'number') return String(input);
-  if (Array.isArray(input)) return 'a list';
-  if (input === null) return 'null';
-  return typeof input === 'object' ? 'a table' : String(input);
-}
-
-function zodIssues(error: z.ZodError): SpecIssue[] {
-  return error.issues.map((issue) => {
-    if (issue.code === 'unrecognized_keys') {
-      const where = issuePath(issue.path);
-      const keys = issue.keys.map((key) => (where ? `${where}.${key}` : key));
-      return { path: keys[0] ?? where, message: `${keys.join(', ')} ${keys.length > 1 ? 'are not inputs' : 'is not an input'} of this spec (check the spelling against docs/input-reference.md)` };
-    }
-    const path = issuePath(issue.path) || '(spec)';
-    const got = 'input' in issue && issue.code !== 'invalid_type' ? `; got ${describeInput(issue.input)}` : issue.code === 'invalid_type' && 'input' in issue && issue.input !== undefined ? `; got ${describeInput(issue.input)}` : '';
-    return { path, message: `${path} ${issue.message}${got}` };
-  });
 }
 
 function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
