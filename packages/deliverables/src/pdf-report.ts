@@ -39,6 +39,7 @@ import {
   formatMass,
   formatKilo,
   formatNumber,
+  formatTraceValue,
   formatResidual,
   formatTonnes,
   formatUtilisation,
@@ -600,12 +601,15 @@ function valuesTable(title: string, values: Record<string, number>): PdfNode {
   return {
     table: {
       headerRows: 1,
-      widths: ['*', 'auto'],
+      widths: ['*', 'auto', 'auto'],
       body: [
-        [headerCell(title), headerCell('Value (SI)', 'right')],
+        [headerCell(title), headerCell('Value', 'right'), headerCell('Unit')],
         ...(entries.length === 0
-          ? [[{ text: 'none recorded', italics: true, colSpan: 2 }, '']]
-          : entries.map(([name, value]) => [{ text: name, style: 'mono' }, numberCell(formatNumber(value))])),
+          ? [[{ text: 'none recorded', italics: true, colSpan: 3 }, '', '']]
+          : entries.map(([name, value]) => {
+              const [text, unit] = formatTraceValue(name, value);
+              return [{ text: name, style: 'mono' }, numberCell(text), unit];
+            })),
       ],
     },
     layout: gridLayout,
@@ -640,7 +644,7 @@ function memberTrace(result: DesignResult, member: MemberResult, index: number):
       margin: [0, 4, 0, 4],
     },
     caption(
-      'Formula inputs and intermediate values are shown in SI base units (N, m, Pa, N m, N m², rad) as the check recorded them.',
+      'Formula inputs and intermediate values in engineering units (forces kN, moments kNm, bimoment kNm², stresses MPa, section constants in cm units); a value without a unit is a ratio, a factor or a count.',
     ),
     ...(rows.length === 0
       ? []

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   formatAngle,
+  formatTraceValue,
   formatBimoment,
   formatForce,
   formatKilo,
@@ -90,5 +91,17 @@ describe('formatKilo', () => {
     expect(formatKilo(-0.0004)).toBe('0');
     expect(formatKilo(0.0006)).toBe('6.000e-4');
     expect(formatKilo(122.84)).toBe('122.8');
+  });
+});
+
+describe('trace values in engineering units', () => {
+  it('converts by the symbol the check recorded (SI to kN, kNm, kNm2, MPa, cm4)', () => {
+    expect(formatTraceValue('My', -122843)).toEqual([formatNumber(-122.843), 'kNm']);
+    expect(formatTraceValue('N', 302900)).toEqual([formatNumber(302.9), 'kN']);
+    expect(formatTraceValue('B', 4021)).toEqual([formatNumber(4.021), 'kNm²']);
+    expect(formatTraceValue('sigma_x flange tip +y +z', 3.258e8)).toEqual([formatNumber(325.8), 'MPa']);
+    expect(formatTraceValue('f_y', 355e6)).toEqual([formatNumber(355), 'MPa']);
+    expect(formatTraceValue('I_t', 185e-8)).toEqual([formatNumber(185), 'cm⁴']);
+    expect(formatTraceValue('gamma_M0', 1)).toEqual([formatNumber(1), '']);
   });
 });

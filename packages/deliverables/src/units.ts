@@ -198,3 +198,40 @@ export function formatQuantity(value: number, siUnit: string): string {
   const separator = unit === '°' || unit === '' ? '' : ' ';
   return `${formatNumber(display.value)}${separator}${unit}`;
 }
+
+/**
+ * Engineering unit of a check's recorded input or intermediate value, inferred from its symbol (the
+ * steel checks record SI values under the symbols of EN 1993-1-1): forces in kN, moments in kNm,
+ * bimoments in kNm², stresses in MPa, section constants in cm units; anything else as recorded.
+ */
+export interface TraceQuantity {
+  unit: string;
+  /** SI value divided by this gives the value in `unit`. */
+  scale: number;
+}
+
+const traceUnits: Array<[RegExp, TraceQuantity]> = [
+  [/^(sigma|tau|f_y|f_u|f_yw|f_yf)(\b|_|\s|$)/, { unit: 'MPa', scale: 1e6 }],
+  [/^(N|Vy|Vz|N_Rd|N_pl_Rd|V_pl_Rd|V_pl_T_Rd|V_Rd|V_c_Rd|F_Rd|F_Ed)$/, { unit: 'kN', scale: 1e3 }],
+  [/^(Tsv|Tw|T|My|Mz|M_y_Rd|M_z_Rd|M_c_Rd|M_Rd|M_cr|M_b_Rd)$/, { unit: 'kNm', scale: 1e3 }],
+  [/^B$/, { unit: 'kNm²', scale: 1e3 }],
+  [/^(A|A_v|A_vz|A_vy)$/, { unit: 'cm²', scale: 1e-4 }],
+  [/^(I_t|I_y|I_z|S_w)$/, { unit: 'cm⁴', scale: 1e-8 }],
+  [/^I_w$/, { unit: 'cm⁶', scale: 1e-12 }],
+  [/^(W_n0)$/, { unit: 'cm²', scale: 1e-4 }],
+  [/^(W_el_y|W_el_z|W_pl_y|W_pl_z|W_y|W_z)$/, { unit: 'cm³', scale: 1e-6 }],
+  [/^(h|b|t_w|t_f|r|h_w|h0|webThickness|flangeThickness)$/, { unit: 'mm', scale: 1e-3 }],
+];
+
+export function traceQuantity(symbol: string): TraceQuantity {
+  for (const [pattern, quantity] of traceUnits) {
+    if (pattern.test(symbol)) return quantity;
+  }
+  return { unit: '', scale: 1 };
+}
+
+/** A recorded check value in engineering units: [formatted number, unit]. */
+export function formatTraceValue(symbol: string, value: number): [string, string] {
+  const { unit, scale } = traceQuantity(symbol);
+  return [formatNumber(value / scale), unit];
+}
