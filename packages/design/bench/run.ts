@@ -7,15 +7,18 @@ const specPath = new URL('../../../demo-data/kestrel-grain-bin.yaml', import.met
 const spec = await readSpecFile(specPath);
 const runs = Number(process.env['BENCH_RUNS'] ?? 5);
 const times: number[] = [];
-let analyses = 0;
+let rounds = 0;
+let sections = '';
 for (let i = 0; i < runs; i++) {
   const start = performance.now();
   const { result } = await designFromSpec(spec);
   times.push(performance.now() - start);
-  analyses = result.optimisation.iterations.length * result.analyses.length;
+  rounds = result.optimisation.iterations.length;
+  sections = result.members.map((member) => `${member.id} ${member.section}`).join(', ');
 }
 times.sort((a, b) => a - b);
 const median = times[Math.floor(times.length / 2)] ?? Number.NaN;
 console.log('design benchmark: demo bin (demo-data/kestrel-grain-bin.yaml)');
-console.log(`  runs ${runs}, median ${median.toFixed(0)} ms, min ${times[0]?.toFixed(0)} ms, max ${times[times.length - 1]?.toFixed(0)} ms; about ${analyses} girder analyses per design`);
+console.log(`  runs ${runs}, median ${median.toFixed(0)} ms, min ${times[0]?.toFixed(0)} ms, max ${times[times.length - 1]?.toFixed(0)} ms`);
+console.log(`  ${rounds} sections analysed in the sizing loop (each under every ULS combination and credible scenario); result ${sections}`);
 console.log(`  target: whole demo design under 5000 ms -> ${median < 5000 ? 'met' : 'NOT met'}`);

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { normaliseSpec, type BinSpecInput } from '@binsupport/spec';
-import { loadRolledSections, steelGrade } from '@binsupport/steel';
-import { analyseSection, designFromSpec, familyToSeries, loadsFor } from './design.js';
+import { loadRolledSections } from '@binsupport/steel';
+import { analyseSection, designContext, designFromSpec, familyToSeries } from './design.js';
+import { SCENARIOS } from './scenarios.js';
 import { stableJson } from './json.js';
 
 // An invented bin (test data only).
@@ -19,13 +20,12 @@ const base: BinSpecInput = {
  */
 function bruteForceChoice(input: BinSpecInput): string | undefined {
   const spec = normaliseSpec(input);
-  const grade = steelGrade(spec.support.grade);
-  const loads = loadsFor(spec);
+  const context = designContext(spec, 3);
+  const credible = SCENARIOS.filter((scenario) => spec.support.credibleScenarios.includes(scenario.id));
   const series = new Set(spec.support.sectionFamilies.map((family) => familyToSeries[family]));
-  const layout = { radius: spec.support.girderDiameter / 2, columns: spec.support.columns, segmentsPerSpan: spec.support.segmentsPerSpan };
   const passing = loadRolledSections()
     .filter((section) => series.has(section.series))
-    .map((section) => analyseSection(spec, loads, layout, section, grade, 5))
+    .map((section) => analyseSection(context, section, credible))
     .filter((entry) => entry.utilisation <= 1)
     .sort((a, b) => a.section.properties.massPerMetre - b.section.properties.massPerMetre);
   return passing[0]?.section.designation;

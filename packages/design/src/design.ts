@@ -1,13 +1,13 @@
-import { analyse, type AnalysisResult, type GirderModel, type SectionStiffness, type Station } from '@binsupport/girder';
-import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
+import { analyse, GirderError, type AnalysisResult, type GirderModel, type SectionStiffness, type Station } from '@binsupport/girder';
+import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
 import { solveSelection } from '@binsupport/optimiser';
 import type { BinSpec } from '@binsupport/spec';
-import { loadRolledSections, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
+import { loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
 import { DesignError } from './errors.js';
 import { envelopeChecks, governingEnvelope, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
 import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
-import { COLUMNS_UNDER_WEB } from './scenarios.js';
+import { SCENARIOS, scenarioSummary, type ScenarioDefinition } from './scenarios.js';
 import { girderModelDocument, type GirderModelDocument } from './model-file.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
 
@@ -41,13 +41,30 @@ function stiffnessOf(section: SteelSection, grade: SteelGrade, density: number):
   return { A: p.area, Iy: p.secondMomentOfAreaY, Iz: p.secondMomentOfAreaZ, It: p.torsionConstant, Iw: p.warpingConstant, E: grade.youngsModulus, G: grade.shearModulus, density };
 }
 
-export interface SectionAnalysis {
-  section: SteelSection;
+/** One scenario's model and its analyses (one per combination) for one section. */
+export interface ScenarioAnalysis {
+  scenario: ScenarioDefinition;
   model: GirderModel;
   analyses: AnalysisResult[];
+}
+
+export interface SectionAnalysis {
+  section: SteelSection;
+  /** The credible scenarios (the design envelope), and later the comparison ones. */
+  scenarios: ScenarioAnalysis[];
   uls: StationSet[];
   envelopes: CheckEnvelope[];
   utilisation: number;
+}
+
+/** What the analyses share across sections: the spec, loads, layout, grade, column stiffness. */
+export interface DesignContext {
+  spec: BinSpec;
+  loads: LoadSet;
+  layout: RingLayout;
+  grade: SteelGrade;
+  column: { section: SteelSection; axialStiffness: number };
+  stationsPerElement: number;
 }
 
 export function loadsFor(spec: BinSpec): LoadSet {
@@ -70,19 +87,66 @@ function guardEquilibrium(analysis: AnalysisResult, scenario: string): void {
   }
 }
 
-export function analyseSection(spec: BinSpec, loads: LoadSet, layout: RingLayout, section: SteelSection, grade: SteelGrade, stationsPerElement: number): SectionAnalysis {
-  const model = buildRingModel({ layout, section: stiffnessOf(section, grade, spec.bin.steelDensity), sectionDepth: section.dimensions.depth, cases: loads.cases, selfWeightCase: PERMANENT_CASE });
-  const analyses = loads.combinations.map((combination) => {
-    const analysis = analyse(model, { name: combination.name, factors: combination.factors }, { stationsPerElement });
-    guardEquilibrium(analysis, COLUMNS_UNDER_WEB.id);
+export function analyseScenario(context: DesignContext, section: SteelSection, scenario: ScenarioDefinition, limitStates: Array<'ULS' | 'SLS'> = ['ULS', 'SLS']): ScenarioAnalysis {
+  const { spec, loads, layout, grade } = context;
+  const model = buildRingModel({
+    layout,
+    section: stiffnessOf(section, grade, spec.bin.steelDensity),
+    sectionDepth: section.dimensions.depth,
+    cases: loads.cases,
+    selfWeightCase: PERMANENT_CASE,
+    columnSupport: scenario.columnSupport(section, context.column, spec, grade),
+  });
+  const analyses = loads.combinations.filter((combination) => limitStates.includes(combination.limitState)).map((combination) => {
+    let analysis: AnalysisResult;
+    try {
+      analysis = analyse(model, { name: combination.name, factors: combination.factors }, { stationsPerElement: context.stationsPerElement });
+    } catch (error) {
+      if (error instanceof GirderError) {
+        throw new DesignError('ANALYSIS_FAILED', `analysis of ${combination.name} / ${scenario.id} with ${section.designation} refused: ${error.message}`);
+      }
+      throw error;
+    }
+    guardEquilibrium(analysis, scenario.id);
     return analysis;
   });
-  const uls = loads.combinations
-    .map((combination, index) => ({ combination, analysis: analyses[index] }))
-    .filter(({ combination }) => combination.limitState === 'ULS')
-    .map(({ combination, analysis }) => ({ combination: combination.name, scenario: COLUMNS_UNDER_WEB.id, stations: analysis?.stations ?? [] }));
-  const envelopes = envelopeChecks(section, grade, uls);
-  return { section, model, analyses, uls, envelopes, utilisation: maxUtilisation(envelopes) };
+  return { scenario, model, analyses };
+}
+
+function ulsStations(context: DesignContext, scenarios: ScenarioAnalysis[]): StationSet[] {
+  const uls = new Set(context.loads.combinations.filter((combination) => combination.limitState === 'ULS').map((combination) => combination.name));
+  return scenarios.flatMap(({ scenario, analyses }) =>
+    analyses.filter((analysis) => uls.has(analysis.combination)).map((analysis) => ({ combination: analysis.combination, scenario: scenario.id, stations: analysis.stations })),
+  );
+}
+
+/** Analyse a section under the given scenarios; the sizing loop needs only the ULS combinations. */
+export function analyseSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], limitStates: Array<'ULS' | 'SLS'> = ['ULS']): SectionAnalysis {
+  const analysed = scenarios.map((scenario) => analyseScenario(context, section, scenario, limitStates));
+  const uls = ulsStations(context, analysed);
+  const envelopes = envelopeChecks(section, context.grade, uls);
+  return { section, scenarios: analysed, uls, envelopes, utilisation: maxUtilisation(envelopes) };
+}
+
+/** The design context of a spec: loads, layout, grade and the column's axial stiffness. */
+export function designContext(spec: BinSpec, stationsPerElement = 5): DesignContext {
+  const grade = steelGrade(spec.support.grade);
+  let columnSection: SteelSection;
+  try {
+    columnSection = rolledSection(spec.support.columnSection);
+  } catch (error) {
+    if (error instanceof SteelError) throw new DesignError('BAD_INPUT', `support.columnSection: ${error.message}`, 'support.columnSection');
+    throw error;
+  }
+  return {
+    spec,
+    loads: loadsFor(spec),
+    layout: { radius: spec.support.girderDiameter / 2, columns: spec.support.columns, segmentsPerSpan: spec.support.segmentsPerSpan },
+    grade,
+    // Axial stiffness of the column, E A / H (the cap's bearing springs share it).
+    column: { section: columnSection, axialStiffness: (grade.youngsModulus * columnSection.properties.area) / spec.support.columnHeight },
+    stationsPerElement,
+  };
 }
 
 /** Where a station lies around the ring, in words a site engineer recognises. */
@@ -136,17 +200,18 @@ function peakOf(stations: Station[], key: 'N' | 'Vz' | 'T' | 'My' | 'Mz' | 'B'):
 export async function designFromSpec(spec: BinSpec, options: DesignOptions = {}): Promise<DesignOutcome> {
   const progress = options.progress ?? (() => undefined);
   const maxIterations = options.maxIterations ?? 8;
-  const stationsPerElement = options.stationsPerElement ?? 5;
-  const grade = steelGrade(spec.support.grade);
+  const stationsPerElement = options.stationsPerElement ?? 3;
+  const context = designContext(spec, stationsPerElement);
+  const { grade, loads, layout } = context;
   const series = new Set(spec.support.sectionFamilies.map((family) => familyToSeries[family]));
   const candidates = loadRolledSections()
     .filter((section) => series.has(section.series))
     .sort((a, b) => a.properties.massPerMetre - b.properties.massPerMetre || a.designation.localeCompare(b.designation));
   if (candidates.length === 0) throw new DesignError('BAD_INPUT', 'no candidate sections in the chosen families', 'support.sectionFamilies');
 
-  const loads = loadsFor(spec);
+  const credible = SCENARIOS.filter((scenario) => spec.support.credibleScenarios.includes(scenario.id));
+  const comparison = SCENARIOS.filter((scenario) => !spec.support.credibleScenarios.includes(scenario.id));
   progress(`loads: solid ${(loads.totals.solidWeight / 1e3).toFixed(1)} kN, plates ${(loads.totals.structureWeight / 1e3).toFixed(1)} kN, ${loads.combinations.length} combinations`);
-  const layout: RingLayout = { radius: spec.support.girderDiameter / 2, columns: spec.support.columns, segmentsPerSpan: spec.support.segmentsPerSpan };
   const girderLength = 2 * Math.PI * layout.radius;
 
   // Start from the heaviest candidate: its self weight bounds the others', so the first forces are on
@@ -155,7 +220,7 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   const analyseCached = (section: SteelSection) => {
     let entry = analysed.get(section.designation);
     if (!entry) {
-      entry = analyseSection(spec, loads, layout, section, grade, stationsPerElement);
+      entry = analyseSection(context, section, credible);
       analysed.set(section.designation, entry);
     }
     return entry;
@@ -167,14 +232,22 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   let feasibleCount = 0;
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
     const state = analyseCached(current);
-    const evaluated = candidates.map((section) => ({ section, utilisation: maxUtilisation(envelopeChecks(section, grade, state.uls)) }));
+    // Candidates are checked lightest first under the current forces. With one member group and
+    // mass as the objective, a heavier candidate can never be chosen once a lighter one passes, so
+    // the heavier ones are pruned as dominated before the integer program (they stay unevaluated).
+    const evaluated: Array<{ section: SteelSection; utilisation: number }> = [];
+    for (const section of candidates) {
+      const utilisation = maxUtilisation(envelopeChecks(section, grade, state.uls));
+      evaluated.push({ section, utilisation });
+      if (utilisation <= 1) break;
+    }
     feasibleCount = evaluated.filter((entry) => entry.utilisation <= 1).length;
     const selection = await solveSelection({
       groups: [{ id: MEMBER_ID, candidates: evaluated.map((entry) => ({ id: entry.section.designation, key: entry.section.designation, cost: entry.section.properties.massPerMetre * girderLength, feasible: entry.utilisation <= 1 })) }],
     });
     selectionStatus = selection.status;
     steps.push({ iteration, choice: { [MEMBER_ID]: current.designation }, mass: current.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(state.utilisation) });
-    progress(`round ${iteration}: analysed ${current.designation} (utilisation ${state.utilisation.toFixed(3)}); ${feasibleCount} of ${candidates.length} candidates pass under its forces`);
+    progress(`round ${iteration}: analysed ${current.designation} (utilisation ${state.utilisation.toFixed(3)}); the lightest candidate that passes under its forces is ${evaluated.length <= candidates.length && feasibleCount > 0 ? evaluated[evaluated.length - 1]?.section.designation : 'none'} (${evaluated.length} of ${candidates.length} checked)`);
     if (selection.status === 'infeasible') break;
     const chosenId = selection.choice[MEMBER_ID];
     const chosen = candidates.find((section) => section.designation === chosenId);
@@ -220,12 +293,16 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   const final = verified[0] ?? bestAttempt;
   const status: DesignResult['status'] = verified.length > 0 ? 'verified' : 'infeasible';
 
-  guardLoadTotals(final, loads, girderLength);
 
   const governing = governingEnvelope(final.envelopes);
   if (!governing) throw new DesignError('ANALYSIS_FAILED', 'no check was evaluated for the girder');
 
-  const positionFor = (station: Station) => positionOf(final.model, layout, station);
+  const firstModel = final.scenarios[0]?.model; // same geometry in every scenario
+  if (!firstModel) throw new DesignError('ANALYSIS_FAILED', 'no credible support scenario was analysed');
+  const positionFor = (station: Station) => positionOf(firstModel, layout, station);
+  // The scenarios not in the envelope are analysed with the chosen section and reported beside it.
+  const allScenarios = [...credible, ...comparison].map((scenario) => analyseScenario(context, final.section, scenario));
+  for (const scenario of allScenarios) guardLoadTotals(final.section, scenario, loads, girderLength);
   const member: MemberResult = {
     id: MEMBER_ID,
     description: `ring girder on ${layout.columns} columns, centroid radius ${layout.radius.toFixed(3)} m`,
@@ -257,17 +334,26 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     utilisation: finiteOrNull(envelope.check.utilisation),
     ...(envelope.check.outOfScope ? { note: envelope.check.outOfScope } : {}),
   }));
-  const analyses: AnalysisSummary[] = final.analyses.map((analysis) => ({
-    combination: analysis.combination,
-    scenario: COLUMNS_UNDER_WEB.id,
-    converged: analysis.converged,
-    iterations: analysis.iterations,
-    residual: analysis.residual,
-    reactionSum: analysis.reactionSum,
-    appliedSum: analysis.appliedSum,
-    peaks: { N: peakOf(analysis.stations, 'N'), Vz: peakOf(analysis.stations, 'Vz'), T: peakOf(analysis.stations, 'T'), My: peakOf(analysis.stations, 'My'), Mz: peakOf(analysis.stations, 'Mz'), B: peakOf(analysis.stations, 'B') },
-    diagram: diagramOf(final.model, layout, analysis.stations),
-  }));
+  const analyses: AnalysisSummary[] = allScenarios.flatMap(({ scenario, model, analyses: results }) =>
+    results.map((analysis) => ({
+      combination: analysis.combination,
+      scenario: scenario.id,
+      converged: analysis.converged,
+      iterations: analysis.iterations,
+      residual: analysis.residual,
+      reactionSum: analysis.reactionSum,
+      appliedSum: analysis.appliedSum,
+      peaks: { N: peakOf(analysis.stations, 'N'), Vz: peakOf(analysis.stations, 'Vz'), T: peakOf(analysis.stations, 'T'), My: peakOf(analysis.stations, 'My'), Mz: peakOf(analysis.stations, 'Mz'), B: peakOf(analysis.stations, 'B') },
+      diagram: diagramOf(model, layout, analysis.stations),
+      ...bearingSummary(analysis),
+    })),
+  );
+  const scenarioSummaries = allScenarios.map(({ scenario, analyses: results }) => {
+    const isCredible = credible.includes(scenario);
+    const envelope = envelopeChecks(final.section, grade, ulsStations(context, [{ scenario, model: firstModel, analyses: results }]));
+    const maxTension = Math.max(0, ...results.map((analysis) => bearingSummary(analysis).bearings?.maxTension ?? 0));
+    return { ...scenarioSummary(scenario, isCredible), utilisation: finiteOrNull(maxUtilisation(envelope)), needsTension: maxTension > 0, maxBearingTension: maxTension };
+  });
   const geometry = circularBinGeometry(spec.bin);
   const girderWeight = final.section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
   const message =
@@ -290,7 +376,7 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
       totals: { solidWeight: loads.totals.solidWeight, structureWeight: loads.totals.structureWeight + girderWeight },
       derivation: loads.derivation,
     },
-    scenarios: [COLUMNS_UNDER_WEB],
+    scenarios: scenarioSummaries,
     analyses,
     members: [member],
     utilisations,
@@ -299,7 +385,37 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   };
   progress(message);
   const combinations = loads.combinations.map((combination) => ({ name: combination.name, factors: combination.factors }));
-  return { result, models: [{ scenario: COLUMNS_UNDER_WEB.id, model: girderModelDocument(final.model, COLUMNS_UNDER_WEB.id, `${member.description}; section ${member.section} ${member.grade}; ${COLUMNS_UNDER_WEB.title}`, combinations) }] };
+  return {
+    result,
+    models: allScenarios.map(({ scenario, model }) => ({ scenario: scenario.id, model: girderModelDocument(model, scenario.id, `${member.description}; section ${member.section} ${member.grade}; ${scenario.title}`, combinations) })),
+  };
+}
+
+/** Bearing forces of an analysis with bearing points (springs with a group). */
+function bearingSummary(analysis: AnalysisResult): Pick<AnalysisSummary, 'bearings'> {
+  const bearingForces = analysis.springForces.filter((spring) => spring.id.includes('-cap-'));
+  if (bearingForces.length === 0) return {};
+  const byColumn = new Map<string, number[]>();
+  for (const spring of bearingForces) {
+    const group = `${spring.id.split('-cap-')[0]} cap`;
+    byColumn.set(group, [...(byColumn.get(group) ?? []), spring.force]);
+  }
+  let mostLoaded = { group: '', forces: [] as number[] };
+  for (const [group, forces] of byColumn) {
+    const total = forces.reduce((sum, force) => sum + force, 0);
+    if (mostLoaded.forces.length === 0 || total > mostLoaded.forces.reduce((sum, force) => sum + force, 0)) mostLoaded = { group, forces };
+  }
+  // A bearing point counts as in contact when it carries more than a trace of the largest force.
+  const maxCompression = Math.max(0, ...bearingForces.map((spring) => spring.force));
+  const threshold = 1e-9 * Math.max(maxCompression, 1);
+  return {
+    bearings: {
+      contactFraction: bearingForces.filter((spring) => spring.force > threshold).length / bearingForces.length,
+      maxCompression,
+      maxTension: Math.max(0, ...bearingForces.map((spring) => -spring.force)),
+      mostLoadedColumn: mostLoaded,
+    },
+  };
 }
 
 function finiteOrNull(value: number): number | null {
@@ -307,11 +423,12 @@ function finiteOrNull(value: number): number | null {
 }
 
 /** The vertical load of the characteristic combination equals solid + plates + girder (guard). */
-function guardLoadTotals(final: SectionAnalysis, loads: LoadSet, girderLength: number): void {
-  const index = loads.combinations.findIndex((combination) => Object.values(combination.factors).every((factor) => factor === 1));
-  const analysis = final.analyses[index];
-  if (!analysis) return;
-  const expected = loads.totals.solidWeight + loads.totals.structureWeight + final.section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
+function guardLoadTotals(section: SteelSection, scenario: ScenarioAnalysis, loads: LoadSet, girderLength: number): void {
+  // The gravity check combination G + Q_s,f (all factors 1), which the loads package lists first.
+  const check = loads.combinations.find((combination) => Object.keys(combination.factors).length === 2 && combination.factors[PERMANENT_CASE] === 1 && combination.factors[SOLID_FILLING_CASE] === 1);
+  const analysis = scenario.analyses.find((candidate) => candidate.combination === check?.name);
+  if (!analysis) throw new DesignError('GUARD_FAILED', 'load-total guard: no combination G + Q_s,f with factors 1 was analysed');
+  const expected = loads.totals.solidWeight + loads.totals.structureWeight + section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
   const applied = -analysis.appliedSum[2];
   if (Math.abs(applied - expected) > RELATIVE_EQUILIBRIUM_TOLERANCE * expected) {
     throw new DesignError('GUARD_FAILED', `load-total guard: ${analysis.combination} applies ${applied.toExponential(6)} N downward, but solid, plates and girder weigh ${expected.toExponential(6)} N`);

@@ -50,3 +50,4 @@ export function governingEnvelope(envelopes: CheckEnvelope[]): CheckEnvelope | u
   }
   return governing;
 }
+

@@ -81,8 +81,16 @@ export interface ScenarioSummary {
   id: string;
   title: string;
   description: string;
+  /** One sentence on what this assumption does to the answer. */
+  lesson: string;
   /** Whether the design envelope includes this scenario. */
   credible: boolean;
+  /** Largest utilisation of the chosen sections if this scenario alone were used (null: outside a check's scope). */
+  utilisation?: number | null;
+  /** True when the scenario needs tension from a bearing that a real bearing cannot give. */
+  needsTension?: boolean;
+  /** Largest tension in a bearing that can pull, N (0 when none pulls). */
+  maxBearingTension?: number;
 }
 
 /** Internal forces around the girder for one analysis, sampled at stations. */
@@ -110,6 +118,17 @@ export interface AnalysisSummary {
   appliedSum: [number, number, number];
   /** Largest absolute internal forces over the girder. */
   peaks: { N: number; Vz: number; T: number; My: number; Mz: number; B: number };
+  /** Bearing state, where the scenario has bearing points. */
+  bearings?: {
+    /** Fraction of the bearing points in contact (pressing). */
+    contactFraction: number;
+    /** Largest compression in one bearing point, N. */
+    maxCompression: number;
+    /** Largest tension in one bearing point, N (bonded bearings only; 0 if none). */
+    maxTension: number;
+    /** Forces of the bearing points of the most loaded column, N, in order across the flange from inside to outside. */
+    mostLoadedColumn: { group: string; forces: number[] };
+  };
   diagram: ForceDiagram;
 }
 
@@ -174,6 +193,7 @@ export interface OptimisationSummary {
   status: 'optimal' | 'feasible' | 'infeasible';
   objective: 'mass';
   candidates: number;
+  /** Candidates that passed under the forces of the last round (checked lightest first, so at most 1 for one member group). */
   feasibleCandidates: number;
   iterations: OptimisationStep[];
   converged: boolean;

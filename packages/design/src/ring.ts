@@ -35,7 +35,45 @@ export function nodeAngle(layout: RingLayout, index: number): number {
   return (2 * Math.PI * index) / (layout.columns * layout.segmentsPerSpan);
 }
 
-/** What to build: a ring of straight segments at the centroid radius, columns under the web. */
+/**
+ * How the girder bears on each column. `point-under-web`: a vertical support at the centroid line,
+ * free to twist. `cap-plate`: the bottom flange rests on the column's cap plate, modelled as `points`
+ * vertical springs spread evenly across the flange width at the underside of the flange; each is the
+ * column's axial stiffness shared equally, in series (optionally) with the bending stiffness of the
+ * flange outstand between the web and the point (a cantilever of the cap length's strip,
+ * k = 3 E I / c^3, I = l_cap t_f^3 / 12; common practice). Compression-only springs let the girder
+ * roll onto the plate edge as it twists; bilateral ones stand for a bonded (welded or bolted tight)
+ * flange.
+ */
+export type ColumnSupport =
+  | { kind: 'point-under-web' }
+  | {
+      kind: 'cap-plate';
+      behaviour: 'compression-only' | 'bilateral';
+      points: number;
+      capLength: number;
+      columnAxialStiffness: number;
+      flangeWidth: number;
+      flangeThickness: number;
+      webThickness: number;
+      youngsModulus: number;
+      flangeFlexibility: boolean;
+    };
+
+/** Springs of one column cap: their offsets across the flange and stiffnesses (see ColumnSupport). */
+export function capSprings(support: Extract<ColumnSupport, { kind: 'cap-plate' }>, sectionDepth: number): Array<{ across: number; down: number; stiffness: number }> {
+  const { points, flangeWidth, flangeThickness, webThickness, capLength, columnAxialStiffness, youngsModulus } = support;
+  const share = columnAxialStiffness / points;
+  return Array.from({ length: points }, (_, i) => {
+    const across = -flangeWidth / 2 + (flangeWidth * i) / (points - 1);
+    const lever = Math.max(Math.abs(across) - webThickness / 2, 0);
+    const flange = lever > 0 && support.flangeFlexibility ? (3 * youngsModulus * (capLength * flangeThickness ** 3) / 12) / lever ** 3 : Infinity;
+    const stiffness = Number.isFinite(flange) ? 1 / (1 / share + 1 / flange) : share;
+    return { across, down: sectionDepth / 2, stiffness };
+  });
+}
+
+/** What to build: a ring of straight segments at the centroid radius on equally spaced columns. */
 export interface RingModelInput {
   layout: RingLayout;
   section: SectionStiffness;
@@ -44,6 +82,7 @@ export interface RingModelInput {
   cases: SupportLineCase[];
   /** Name of the case that carries the girder's self weight. */
   selfWeightCase: string;
+  columnSupport?: ColumnSupport;
 }
 
 /**
@@ -72,7 +111,24 @@ export function buildRingModel(input: RingModelInput): GirderModel {
   for (let j = 0; j < layout.columns; j++) {
     const k = j * layout.segmentsPerSpan;
     const angle = nodeAngle(layout, k);
-    supports.push({ node: nodeId(k), fix: ['uz'] });
+    const column = input.columnSupport ?? { kind: 'point-under-web' };
+    if (column.kind === 'point-under-web') {
+      supports.push({ node: nodeId(k), fix: ['uz'] });
+    } else {
+      const outward: Vec3 = [Math.cos(angle), Math.sin(angle), 0];
+      capSprings(column, sectionDepth).forEach((point, i) => {
+        springs.push({
+          id: `${columnId(j)}-cap-${i + 1}`,
+          node: nodeId(k),
+          direction: [0, 0, 1],
+          stiffness: point.stiffness,
+          offset: [point.across * outward[0], point.across * outward[1], -point.down],
+          behaviour: column.behaviour,
+          group: `${columnId(j)} cap`,
+          tributaryLength: column.capLength,
+        });
+      });
+    }
     springs.push({ id: `${columnId(j)}-bracing`, node: nodeId(k), direction: [-Math.sin(angle), Math.cos(angle), 0], stiffness: TANGENTIAL_BRACING_STIFFNESS });
   }
 

@@ -12,9 +12,27 @@ export interface CircularBin {
     apexHalfAngle: number;
     outletDiameter: number;
     thickness: number;
+    /**
+     * Hopper bottom load magnifier C_b (EN 1991-4 6.1.2); default 1.3 in AAC 1 or for a solid prone
+     * to dynamic behaviour, else 1.0 (from memory).
+     */
+    bottomLoadMagnifier?: number;
   };
   /** Density of the plates, kg/m3. */
   steelDensity: number;
+  /**
+   * Shape of the top surface of the solid: 'level' (default) or a conical 'pile' at the angle of
+   * repose. With a pile, fillHeight is the height of the equivalent surface (same volume).
+   */
+  topSurface?: 'level' | 'pile';
+  /** Eccentricity of the filling point (apex of the pile) e_f from the bin axis, m (default 0). */
+  fillingEccentricity?: number;
+  /** Eccentricity of the outlet (or of the discharge channel) e_o from the bin axis, m (default 0). */
+  outletEccentricity?: number;
+  /** Direction of the eccentricities and of the patch loads, rad from +X counter-clockwise (default 0). */
+  eccentricityAngle?: number;
+  /** Action assessment class chosen by the engineer; may raise, never lower, the class of Table 2.1. */
+  actionAssessmentClass?: 1 | 2 | 3;
 }
 
 export interface CircularBinGeometry {

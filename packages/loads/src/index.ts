@@ -2,8 +2,39 @@ export { janssenProfile, type JanssenParameters, type JanssenProfile, type Janss
 export { squatProfile, type SquatParameters, type SquatProfile } from './squat.js';
 export { characteristicSet, type CharacteristicSet, type LoadEffect, type SolidProperties } from './properties.js';
 export { slendernessClass, type SlendernessClass } from './slenderness.js';
+export { actionAssessmentClass, type ActionAssessmentClass, type ClassInput } from './classification.js';
+export { topSurface, type TopSurface } from './surface.js';
+export { dischargeFactors, patchFactors, patchHeight, thinWalledPatchForce, type DischargeFactors } from './wall.js';
+export { hopperPressures, hopperWallVerticalResultant, type HopperParameters, type HopperPressures, type HopperPressureSet, type HopperState } from './hopper.js';
+export { cylinderForceCoefficient, effectiveSlenderness, endEffectFactor, peakVelocityPressure, roofShapeCoefficient, TERRAIN, type PeakVelocityPressure, type TerrainCategory } from './climate.js';
 export { circularBinGeometry, type CircularBin, type CircularBinGeometry } from './geometry.js';
-export { circularBinLoads, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type CircularBinLoadInput } from './circular.js';
-export { gravityCombinations, type PartialFactors } from './combinations.js';
+export {
+  circularBinLoads,
+  isGravityCase,
+  seismicCaseName,
+  windCaseName,
+  DISCHARGE_PATCH_CASE,
+  EQUIPMENT_PERMANENT_CASE,
+  EQUIPMENT_VARIABLE_CASE,
+  FILLING_PATCH_CASE,
+  HOPPER_MAGNIFIER_CASE,
+  PERMANENT_CASE,
+  ROOF_DEAD_CASE,
+  ROOF_IMPOSED_CASE,
+  SNOW_CASE,
+  SOLID_DISCHARGE_CASE,
+  SOLID_FILLING_CASE,
+  STANDARD_GRAVITY,
+  type CircularBinLoadInput,
+  type EquipmentLoad,
+  type RoofInput,
+  type SeismicInput,
+  type SnowInput,
+  type StoredSolidInput,
+  type WindInput,
+} from './circular.js';
+export { rectangularBinLoads, tributaryDepth, type EdgeLoad, type RectangularBin, type RectangularBinLoadInput, type RectangularLoadSet } from './rectangular.js';
+export { combineActions, DEFAULT_PSI, type CombinationInput, type PartialFactors, type PsiFactors, type VariableAction, type VariableGroup } from './combinations.js';
+export { globalBending, lineLoadAt } from './harmonics.js';
 export { LoadsError, type LoadsErrorCode } from './errors.js';
-export type { DerivationStep, LoadCombination, LoadSet, PressureProfile, SupportLineCase } from './types.js';
+export type { ActionKind, DerivationStep, Harmonic, LoadCombination, LoadSet, PressureProfile, SupportLineCase, Verification } from './types.js';

@@ -6,31 +6,44 @@ import type { IndexedCandidate, IndexedProblem, SelectionCandidate, SelectionPro
 const maxCombinations = 5_000_000;
 
 /**
- * Visit every admissible combination (one feasible candidate per group, same keys within each
- * component, at most maxDistinctKeys distinct keys) in lexicographic order of candidate positions.
- * The visitor returns true to stop.
+ * Visit every admissible combination (one feasible candidate per group within its limits, equal
+ * labels within each coupled component, at most maxDistinctKeys distinct keys) in lexicographic order
+ * of candidate positions. The visitor returns true to stop.
  */
 function enumerate(p: IndexedProblem, ignoreKeyCap: boolean, visit: (chosen: IndexedCandidate[]) => boolean): void {
   const chosen: IndexedCandidate[] = [];
   const keyCount = new Map<string, number>();
-  const componentKey: Array<string | undefined> = p.components.map(() => undefined);
+  const bound: Array<Array<string | undefined>> = p.couplings.map((coupling) => coupling.components.map(() => undefined));
   const cap = ignoreKeyCap ? undefined : p.maxDistinctKeys;
   const step = (g: number): boolean => {
     if (g === p.groups.length) return visit(chosen);
-    const c = p.component[g] ?? -1;
     for (const entry of p.feasible[g] ?? []) {
+      const fits = p.couplings.every((coupling, k) => {
+        const c = coupling.component[g] ?? -1;
+        const label = bound[k]?.[c];
+        return c < 0 || label === undefined || label === coupling.label(entry.candidate);
+      });
+      if (!fits) continue;
       const key = entry.candidate.key;
-      const bound = c >= 0 ? componentKey[c] : undefined;
-      if (bound !== undefined && bound !== key) continue;
       const count = keyCount.get(key) ?? 0;
       if (cap !== undefined && count === 0 && keyCount.size >= cap) continue;
       keyCount.set(key, count + 1);
-      const setsComponent = c >= 0 && bound === undefined;
-      if (setsComponent) componentKey[c] = key;
+      const setHere: Array<[number, number]> = [];
+      p.couplings.forEach((coupling, k) => {
+        const c = coupling.component[g] ?? -1;
+        const labels = bound[k];
+        if (c >= 0 && labels && labels[c] === undefined) {
+          labels[c] = coupling.label(entry.candidate);
+          setHere.push([k, c]);
+        }
+      });
       chosen.push(entry);
       const stop = step(g + 1);
       chosen.pop();
-      if (setsComponent) componentKey[c] = undefined;
+      for (const [k, c] of setHere) {
+        const labels = bound[k];
+        if (labels) labels[c] = undefined;
+      }
       if (count === 0) keyCount.delete(key);
       else keyCount.set(key, count);
       if (stop) return true;
@@ -55,21 +68,24 @@ export function bruteForceSelection(problem: SelectionProblem): SelectionResult 
       `Exhaustive enumeration would visit ${combinations.toExponential(2)} combinations (limit ${maxCombinations}); use solveSelection.`,
     );
   }
+  const cost = (chosen: readonly IndexedCandidate[]): number => totalCost(chosen.map((e) => e.candidate), p.distinctKeyCost);
 
   let least = Number.POSITIVE_INFINITY;
   enumerate(p, false, (chosen) => {
-    least = Math.min(least, totalCost(chosen.map((e) => e.candidate)));
+    least = Math.min(least, cost(chosen));
     return false;
   });
 
   if (least === Number.POSITIVE_INFINITY) {
-    // Only the distinct-key cap can be at fault: same-key components were checked above.
     let fewest = Number.POSITIVE_INFINITY;
     enumerate(p, true, (chosen) => {
       fewest = Math.min(fewest, new Set(chosen.map((e) => e.candidate.key)).size);
       return false;
     });
     const ids = p.groups.map((g) => g.id);
+    if (fewest === Number.POSITIVE_INFINITY) {
+      return infeasibleResult(`Groups ${quoted(ids)} cannot meet their same-key and same-attribute couplings together with their feasible candidates.`, ids);
+    }
     return infeasibleResult(
       `Groups ${quoted(ids)} need at least ${fewest} distinct keys between them, but maxDistinctKeys is ${p.maxDistinctKeys ?? 'unset'}.`,
       ids,
@@ -79,9 +95,8 @@ export function bruteForceSelection(problem: SelectionProblem): SelectionResult 
   const limit = least + tieTolerance(least);
   let best: SelectionCandidate[] = [];
   enumerate(p, false, (chosen) => {
-    const candidates = chosen.map((e) => e.candidate);
-    if (totalCost(candidates) <= limit) {
-      best = candidates;
+    if (cost(chosen) <= limit) {
+      best = chosen.map((e) => e.candidate);
       return true;
     }
     return false;
@@ -91,5 +106,5 @@ export function bruteForceSelection(problem: SelectionProblem): SelectionResult 
     const c = best[g];
     if (c) choice[group.id] = c.id;
   });
-  return { status: 'optimal', choice, objective: totalCost(best), gap: 0, explanation: null, conflictingGroups: [] };
+  return { status: 'optimal', choice, objective: totalCost(best, p.distinctKeyCost), gap: 0, explanation: null, conflictingGroups: [] };
 }

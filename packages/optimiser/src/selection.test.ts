@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { bruteForceSelection, OptimiserError, solveSelection } from './index.js';
+import { bruteForceSelection, OptimiserError, relaxationBound, solveSelection } from './index.js';
 import type { SelectionProblem, SelectionResult } from './index.js';
 
 /** mulberry32: a small seeded PRNG, so every run draws the same problems. */
@@ -110,6 +110,90 @@ describe('solveSelection against exhaustive enumeration', () => {
   });
 });
 
+/**
+ * Random problems with every kind of constraint: attributes (depth 1-3, grade 235/355) on every
+ * candidate, group limits, same-attribute couplings, same-key couplings, a key cap and a cost per key.
+ */
+function randomExtendedProblem(random: () => number): SelectionProblem {
+  const int = (lo: number, hi: number): number => lo + Math.floor(random() * (hi - lo + 1));
+  const keys = ['A', 'B', 'C', 'D'].slice(0, int(1, 4));
+  const groupCount = int(1, 4);
+  const groups = Array.from({ length: groupCount }, (_, g) => {
+    const group: SelectionProblem['groups'][number] = {
+      id: `g${g}`,
+      candidates: Array.from({ length: int(1, 5) }, (_, s) => ({
+        id: `c${s}`,
+        key: keys[int(0, keys.length - 1)] ?? 'A',
+        cost: int(1, 6),
+        feasible: random() < 0.85,
+        attributes: { depth: int(1, 3), grade: random() < 0.5 ? 235 : 355 },
+      })),
+    };
+    if (random() < 0.3) group.limits = random() < 0.5 ? { depth: { max: int(1, 3) } } : { depth: { min: int(1, 3) }, grade: { max: 300 } };
+    return group;
+  });
+  const ids = groups.map((g) => g.id);
+  const subset = (): string[] => [...ids].sort(() => random() - 0.5).slice(0, int(2, Math.max(2, groupCount)));
+  const problem: SelectionProblem = { groups };
+  if (groupCount > 1 && random() < 0.6) {
+    problem.sameAttributeGroups = [{ groups: subset(), attribute: random() < 0.6 ? 'depth' : 'grade' }];
+    if (random() < 0.3) problem.sameAttributeGroups.push({ groups: subset(), attribute: 'depth' });
+  }
+  if (groupCount > 1 && random() < 0.3) problem.sameKeyGroups = [subset()];
+  if (random() < 0.4) problem.maxDistinctKeys = int(1, 3);
+  if (random() < 0.5) problem.distinctKeyCost = [0.5, 2, 5][int(0, 2)] ?? 0;
+  return problem;
+}
+
+describe('solveSelection against exhaustive enumeration, attribute limits and couplings', () => {
+  it('agrees with brute force on 400 seeded problems with limits, same-attribute couplings and key costs', async () => {
+    const random = prng(20261202);
+    const tally = { infeasible: 0, couplingConflict: 0, limitInfeasible: 0, attributeCoupled: 0, keyCost: 0, optimal: 0 };
+    for (let n = 0; n < 400; n++) {
+      const problem = randomExtendedProblem(random);
+      const reference = bruteForceSelection(problem);
+      const result = await solveSelection(problem);
+      expectSame(result, reference, `extended case ${n}: ${JSON.stringify(problem)}`);
+      if (reference.status === 'infeasible') tally.infeasible++;
+      else tally.optimal++;
+      if (reference.explanation?.includes('within the limits')) tally.limitInfeasible++;
+      if (reference.explanation?.includes('cannot meet') || reference.explanation?.includes('the same value of attribute')) tally.couplingConflict++;
+      if (problem.sameAttributeGroups) tally.attributeCoupled++;
+      if (problem.distinctKeyCost) tally.keyCost++;
+    }
+    // Every branch must be exercised, or the agreement proves little.
+    expect(tally.optimal).toBeGreaterThan(150);
+    expect(tally.infeasible).toBeGreaterThan(30);
+    expect(tally.couplingConflict).toBeGreaterThan(10);
+    expect(tally.limitInfeasible).toBeGreaterThan(5);
+    expect(tally.attributeCoupled).toBeGreaterThan(150);
+    expect(tally.keyCost).toBeGreaterThan(100);
+  });
+
+  it('the LP relaxation bound never exceeds the enumerated optimum, and equals it without couplings', async () => {
+    const random = prng(99);
+    let compared = 0;
+    for (let n = 0; n < 150; n++) {
+      const problem = randomExtendedProblem(random);
+      const reference = bruteForceSelection(problem);
+      if (reference.status !== 'optimal') continue;
+      const bound = await relaxationBound(problem);
+      expect(bound, `case ${n}`).not.toBeNull();
+      expect(bound ?? Number.POSITIVE_INFINITY, `case ${n}`).toBeLessThanOrEqual(reference.objective + 1e-9);
+      compared++;
+    }
+    expect(compared).toBeGreaterThan(60);
+    // One candidate per group and nothing else: the assignment LP has integral optima (by hand: 1 + 2).
+    const plain: SelectionProblem = {
+      groups: [
+        { id: 'a', candidates: [{ id: 'p', key: 'K1', cost: 3, feasible: true }, { id: 'q', key: 'K2', cost: 1, feasible: true }] },
+        { id: 'b', candidates: [{ id: 'r', key: 'K1', cost: 2, feasible: true }, { id: 's', key: 'K3', cost: 4, feasible: true }] },
+      ],
+    };
+    expect(await relaxationBound(plain)).toBeCloseTo(3, 9);
+  });
+});
+
 describe('solveSelection cases worked by hand', () => {
   it('a single group takes its cheapest feasible candidate, the first of equals', async () => {
     const problem: SelectionProblem = {
@@ -202,6 +286,87 @@ describe('solveSelection cases worked by hand', () => {
     );
     expect(result.conflictingGroups).toEqual(['a', 'b', 'c']);
     expect(bruteForceSelection(problem).status).toBe('infeasible');
+  });
+
+  it('limits on attributes exclude candidates (a depth limit)', async () => {
+    // The cheapest ring candidate is 0.6 m deep; with maxDepth 0.5 the next one wins.
+    const problem: SelectionProblem = {
+      groups: [
+        {
+          id: 'ring',
+          limits: { depth: { max: 0.5 }, flangeWidth: { min: 0.2 } },
+          candidates: [
+            { id: 'deep', key: 'D600', cost: 10, feasible: true, attributes: { depth: 0.6, flangeWidth: 0.22 } },
+            { id: 'narrow', key: 'N450', cost: 11, feasible: true, attributes: { depth: 0.45, flangeWidth: 0.19 } },
+            { id: 'fits', key: 'F500', cost: 12, feasible: true, attributes: { depth: 0.5, flangeWidth: 0.2 } },
+          ],
+        },
+      ],
+    };
+    expect((await solveSelection(problem)).choice).toEqual({ ring: 'fits' });
+    expect(bruteForceSelection(problem).choice).toEqual({ ring: 'fits' });
+    const tooTight: SelectionProblem = { groups: [{ ...problem.groups[0]!, limits: { depth: { max: 0.3 } } }] };
+    expect((await solveSelection(tooTight)).explanation).toBe('Group "ring" has no feasible candidate within the limits.');
+  });
+
+  it('same-attribute groups share a depth; one grade for all through a grade attribute', async () => {
+    // Alone: a takes a400 (cost 4, depth 400) and b takes b500 (3, depth 500). Same depth: 400 -> 4 + 5 = 9,
+    // 500 -> 6 + 3 = 9: a tie, broken by candidate order in group a (a400 first).
+    const c = (id: string, cost: number, depth: number, grade: number): SelectionProblem['groups'][number]['candidates'][number] => ({
+      id,
+      key: `${id} S${grade}`,
+      cost,
+      feasible: true,
+      attributes: { depth, grade },
+    });
+    const problem: SelectionProblem = {
+      groups: [
+        { id: 'a', candidates: [c('a400', 4, 400, 355), c('a500', 6, 500, 235)] },
+        { id: 'b', candidates: [c('b400', 5, 400, 235), c('b500', 3, 500, 355)] },
+      ],
+    };
+    expect((await solveSelection(problem)).choice).toEqual({ a: 'a400', b: 'b500' });
+    const sameDepth = { ...problem, sameAttributeGroups: [{ groups: ['a', 'b'], attribute: 'depth' }] };
+    const solved = await solveSelection(sameDepth);
+    expect(solved.choice).toEqual({ a: 'a400', b: 'b400' });
+    expect(solved.objective).toBe(9);
+    expect(bruteForceSelection(sameDepth)).toEqual(solved);
+    // Same depth and one grade: 400 mixes S355 and S235, 500 mixes S235 and S355: nothing is left.
+    const oneGrade = { ...sameDepth, sameAttributeGroups: [...sameDepth.sameAttributeGroups, { groups: ['a', 'b'], attribute: 'grade' }] };
+    const none = await solveSelection(oneGrade);
+    expect(none.status).toBe('infeasible');
+    expect(none.explanation).toBe('Groups "a", "b" cannot meet their same-key and same-attribute couplings together with their feasible candidates.');
+    expect(bruteForceSelection(oneGrade).status).toBe('infeasible');
+  });
+
+  it('a cost per distinct key can make sharing a key the cheaper design', async () => {
+    // Without it: a takes X (1), b takes Y (1), total 2. With 2.5 per key: X+Y = 2 + 5 = 7, both Y = 3 + 1 + 2.5 = 6.5,
+    // both X = 1 + 5 + 2.5 = 8.5 (by hand).
+    const problem: SelectionProblem = {
+      groups: [
+        { id: 'a', candidates: [{ id: 'ax', key: 'X', cost: 1, feasible: true }, { id: 'ay', key: 'Y', cost: 3, feasible: true }] },
+        { id: 'b', candidates: [{ id: 'bx', key: 'X', cost: 5, feasible: true }, { id: 'by', key: 'Y', cost: 1, feasible: true }] },
+      ],
+      distinctKeyCost: 2.5,
+    };
+    const result = await solveSelection(problem);
+    expect(result.choice).toEqual({ a: 'ay', b: 'by' });
+    expect(result.objective).toBe(6.5);
+    expect(bruteForceSelection(problem)).toEqual(result);
+  });
+
+  it('rejects a coupled or limited candidate without the attribute, and a negative key cost', async () => {
+    const problem: SelectionProblem = {
+      groups: [
+        { id: 'a', candidates: [{ id: 'p', key: 'K', cost: 1, feasible: true, attributes: { depth: 1 } }] },
+        { id: 'b', candidates: [{ id: 'q', key: 'K', cost: 1, feasible: true }] },
+      ],
+      sameAttributeGroups: [{ groups: ['a', 'b'], attribute: 'depth' }],
+    };
+    await expect(solveSelection(problem)).rejects.toThrowError(
+      new OptimiserError('INVALID_PROBLEM', 'Candidate "q" of group "b" needs a finite attribute "depth" (sameAttributeGroups on "depth").', 'groups[1].candidates[0].attributes.depth'),
+    );
+    await expect(solveSelection({ groups: [], distinctKeyCost: -1 })).rejects.toThrowError(/distinctKeyCost must be a finite number of at least 0/);
   });
 
   it('solves an empty problem and accepts a time limit', async () => {

@@ -1,7 +1,7 @@
 import GLPK from 'glpk.js/node';
 import type { LP } from 'glpk.js/node';
 import { OptimiserError } from './errors.js';
-import { commonKeys, immediateInfeasibility, indexProblem, infeasibleResult, quoted, tieTolerance, totalCost } from './problem.js';
+import { couplableCandidates, couplingsOf, immediateInfeasibility, indexProblem, infeasibleResult, quoted, tieTolerance, totalCost } from './problem.js';
 import type { IndexedCandidate, IndexedProblem, SelectionProblem, SelectionResult } from './problem.js';
 
 export interface SolveOptions {
@@ -24,20 +24,21 @@ const variableName = (g: number, entry: IndexedCandidate): string => `x${g}_${en
 
 /**
  * Keep only candidates that can be in the chosen solution (provably safe under every constraint):
- *  - in a same-key component, only keys that are feasible in all of its groups;
- *  - among candidates whose keys are interchangeable (the same key; or any key when the group is
- *    coupled to nothing), a candidate goes when an earlier one is no dearer (it could never win the tie
- *    break), or when another is dearer by more than any possible tie tolerance (it could never be optimal).
+ *  - in a coupled component, only labels (keys, attribute values) that are feasible in all of its groups;
+ *  - among candidates that are interchangeable (the same key where keys matter, the same value of every
+ *    attribute the group is coupled by), a candidate goes when an earlier one is no dearer (it could never
+ *    win the tie break), or when another is cheaper by more than any possible tie tolerance.
  */
 function pruneCandidates(p: IndexedProblem): Allowed {
-  const costBound = p.feasible.reduce((sum, list) => sum + Math.max(0, ...list.map((e) => Math.abs(e.candidate.cost))), 0);
+  const costBound =
+    p.feasible.reduce((sum, list) => sum + Math.max(0, ...list.map((e) => Math.abs(e.candidate.cost))), 0) + p.distinctKeyCost * p.groups.length;
   const slack = tieTolerance(costBound);
-  return p.feasible.map((list, g) => {
-    const c = p.component[g] ?? -1;
-    const keys = c >= 0 ? new Set(commonKeys(p, p.components[c] ?? [])) : undefined;
-    const admissible = keys ? list.filter((e) => keys.has(e.candidate.key)) : list;
-    const keysMatter = p.maxDistinctKeys !== undefined || c >= 0;
-    const classOf = (e: IndexedCandidate): string => (keysMatter ? e.candidate.key : '');
+  const keysEverywhere = p.maxDistinctKeys !== undefined || p.distinctKeyCost > 0;
+  return couplableCandidates(p).map((admissible, g) => {
+    const coupled = couplingsOf(p, g);
+    const keysMatter = keysEverywhere || coupled.some((coupling) => coupling.kind === 'key');
+    const attributes = coupled.filter((coupling) => coupling.kind === 'attribute');
+    const classOf = (e: IndexedCandidate): string => [keysMatter ? e.candidate.key : '', ...attributes.map((a) => a.label(e.candidate))].join('\u0000');
     const cheapest = new Map<string, number>();
     for (const e of admissible) cheapest.set(classOf(e), Math.min(cheapest.get(classOf(e)) ?? Number.POSITIVE_INFINITY, e.candidate.cost));
     const lowestSoFar = new Map<string, number>();
@@ -63,7 +64,8 @@ function buildModel(g: Glpk, p: IndexedProblem, allowed: Allowed, options: Model
   const keyIndex = new Map<string, number>();
   allowed.forEach((list) => list.forEach((e) => keyIndex.has(e.candidate.key) || keyIndex.set(e.candidate.key, keyIndex.size)));
   const keyVar = (key: string): string => `y${keyIndex.get(key) ?? -1}`;
-  const needKeys = options.objective === 'distinctKeys' || (options.keyCap && p.maxDistinctKeys !== undefined);
+  const keyCost = options.objective === 'distinctKeys' ? 0 : p.distinctKeyCost;
+  const needKeys = options.objective === 'distinctKeys' || (options.keyCap && p.maxDistinctKeys !== undefined) || keyCost > 0;
   const subjectTo: LP['subjectTo'] = [];
 
   allowed.forEach((list, gi) => {
@@ -88,30 +90,35 @@ function buildModel(g: Glpk, p: IndexedProblem, allowed: Allowed, options: Model
       bnds: { type: g.GLP_UP, lb: 0, ub: p.maxDistinctKeys },
     });
   }
-  p.components.forEach((members, c) => {
-    const [first, ...rest] = members;
-    if (first === undefined) return;
-    for (const [key] of keyIndex) {
-      const pick = (gi: number, sign: number): Array<{ name: string; coef: number }> =>
-        (allowed[gi] ?? []).filter((e) => e.candidate.key === key).map((e) => ({ name: variableName(gi, e), coef: sign }));
-      rest.forEach((gi, i) => {
-        const vars = [...pick(first, 1), ...pick(gi, -1)];
-        if (vars.length > 0) subjectTo.push({ name: `same${c}_${i}_${keyIndex.get(key) ?? -1}`, vars, bnds: { type: g.GLP_FX, lb: 0, ub: 0 } });
+  // Couplings: within a component, the share of each label is equal in every group,
+  // sum_{s: label(s) = v} x[first][s] = sum_{s: label(s) = v} x[g][s].
+  p.couplings.forEach((coupling, k) => {
+    coupling.components.forEach((members, c) => {
+      const [first, ...rest] = members;
+      if (first === undefined) return;
+      const labels = [...new Set(members.flatMap((gi) => (allowed[gi] ?? []).map((e) => coupling.label(e.candidate))))];
+      labels.forEach((label, v) => {
+        const pick = (gi: number, sign: number): Array<{ name: string; coef: number }> =>
+          (allowed[gi] ?? []).filter((e) => coupling.label(e.candidate) === label).map((e) => ({ name: variableName(gi, e), coef: sign }));
+        rest.forEach((gi, i) => {
+          const vars = [...pick(first, 1), ...pick(gi, -1)];
+          if (vars.length > 0) subjectTo.push({ name: `same${k}_${c}_${i}_${v}`, vars, bnds: { type: g.GLP_FX, lb: 0, ub: 0 } });
+        });
       });
-    }
-  });
-  if (options.costBound !== undefined) {
-    subjectTo.push({
-      name: 'cost',
-      vars: allowed.flatMap((list, gi) => list.map((e) => ({ name: variableName(gi, e), coef: e.candidate.cost }))),
-      bnds: { type: g.GLP_UP, lb: 0, ub: options.costBound },
     });
+  });
+  const costVars = [
+    ...allowed.flatMap((list, gi) => list.map((e) => ({ name: variableName(gi, e), coef: e.candidate.cost }))),
+    ...(keyCost > 0 ? [...keyIndex.keys()].map((key) => ({ name: keyVar(key), coef: keyCost })) : []),
+  ];
+  if (options.costBound !== undefined) {
+    subjectTo.push({ name: 'cost', vars: costVars, bnds: { type: g.GLP_UP, lb: 0, ub: options.costBound } });
   }
 
   const objective = options.objective;
   const objectiveVars =
     objective === 'cost'
-      ? allowed.flatMap((list, gi) => list.map((e) => ({ name: variableName(gi, e), coef: e.candidate.cost })))
+      ? costVars
       : objective === 'distinctKeys'
         ? [...keyIndex.keys()].map((key) => ({ name: keyVar(key), coef: 1 }))
         : (allowed[objective.rankOfGroup] ?? []).map((e) => ({ name: variableName(objective.rankOfGroup, e), coef: e.position }));
@@ -165,70 +172,89 @@ function readChoice(p: IndexedProblem, allowed: Allowed, values: Record<string, 
   });
 }
 
-function fewestDistinctKeys(g: Glpk, problem: SelectionProblem, deadline: Deadline): number | undefined {
-  const p = indexProblem({ ...problem, maxDistinctKeys: undefined });
-  if (immediateInfeasibility(p)) return undefined;
+/** Fewest distinct keys any admissible choice needs (ignoring the cap); 'infeasible' when none exists; undefined on timeout. */
+function fewestDistinctKeys(g: Glpk, problem: SelectionProblem, deadline: Deadline): number | 'infeasible' | undefined {
+  const p = indexProblem({ ...problem, maxDistinctKeys: undefined, distinctKeyCost: undefined });
+  if (immediateInfeasibility(p)) return 'infeasible';
+  if (p.groups.length === 0) return 0;
   const outcome = run(g, buildModel(g, p, pruneCandidatesForKeyCount(p), { objective: 'distinctKeys', keyCap: false, binaries: true }), deadline);
+  if (outcome.kind === 'infeasible') return 'infeasible';
   return outcome.kind === 'optimal' ? Math.round(outcome.z) : undefined;
 }
 
-/** For counting keys only the keys matter: one candidate per key per group is enough. */
+/** For counting keys only the labels matter: one candidate per (key, coupled labels) per group is enough. */
 function pruneCandidatesForKeyCount(p: IndexedProblem): Allowed {
-  return p.feasible.map((list, gi) => {
-    const c = p.component[gi] ?? -1;
-    const keys = c >= 0 ? new Set(commonKeys(p, p.components[c] ?? [])) : undefined;
+  return couplableCandidates(p).map((list, gi) => {
+    const coupled = couplingsOf(p, gi);
     const seen = new Set<string>();
     return list.filter((e) => {
-      if ((keys && !keys.has(e.candidate.key)) || seen.has(e.candidate.key)) return false;
-      seen.add(e.candidate.key);
+      const cls = [e.candidate.key, ...coupled.map((coupling) => coupling.label(e.candidate))].join('\u0000');
+      if (seen.has(cls)) return false;
+      seen.add(cls);
       return true;
     });
   });
 }
 
-/** Restrict a problem to some of its groups, with the same-key sets among those groups only. */
+/** Restrict a problem to some of its groups, with the couplings among those groups only. */
 function subProblem(problem: SelectionProblem, ids: ReadonlySet<string>): SelectionProblem {
   return {
     groups: problem.groups.filter((group) => ids.has(group.id)),
     sameKeyGroups: (problem.sameKeyGroups ?? []).map((set) => set.filter((id) => ids.has(id))).filter((set) => set.length > 1),
+    sameAttributeGroups: (problem.sameAttributeGroups ?? [])
+      .map((entry) => ({ attribute: entry.attribute, groups: entry.groups.filter((id) => ids.has(id)) }))
+      .filter((entry) => entry.groups.length > 1),
   };
 }
 
 /**
- * Why the distinct-key cap cannot be met: a smallest-by-deletion set of groups that on their own
- * already need more than maxDistinctKeys keys.
+ * Why the model has no solution. Either the couplings cannot be met together (a smallest-by-deletion
+ * set of groups whose couplings alone conflict), or the distinct-key cap cannot be met (a
+ * smallest-by-deletion set of groups that on their own already need more than maxDistinctKeys keys).
  */
-function explainKeyCap(g: Glpk, problem: SelectionProblem, cap: number, deadline: Deadline): SelectionResult {
+function explainInfeasible(g: Glpk, problem: SelectionProblem, cap: number | undefined, deadline: Deadline): SelectionResult {
   const all = problem.groups.map((group) => group.id);
   const needed = fewestDistinctKeys(g, problem, deadline);
   let kept = new Set(all);
+  if (needed === 'infeasible') {
+    for (const id of all) {
+      if (expired(deadline)) break;
+      const trial = new Set([...kept].filter((other) => other !== id));
+      if (trial.size > 0 && fewestDistinctKeys(g, subProblem(problem, trial), deadline) === 'infeasible') kept = trial;
+    }
+    const ids = all.filter((id) => kept.has(id));
+    return infeasibleResult(`Groups ${quoted(ids)} cannot meet their same-key and same-attribute couplings together with their feasible candidates.`, ids);
+  }
+  const limit = cap ?? 0;
   let keptNeed = needed;
   if (needed !== undefined) {
     for (const id of all) {
       if (expired(deadline)) break;
       const trial = new Set([...kept].filter((other) => other !== id));
       const need = trial.size === 0 ? 0 : fewestDistinctKeys(g, subProblem(problem, trial), deadline);
-      if (need !== undefined && need > cap) {
+      if (typeof need === 'number' && need > limit) {
         kept = trial;
         keptNeed = need;
       }
     }
   }
   const ids = all.filter((id) => kept.has(id));
-  const count = keptNeed === undefined ? `more than ${cap}` : `at least ${keptNeed}`;
+  const count = keptNeed === undefined ? `more than ${limit}` : `at least ${keptNeed}`;
   return infeasibleResult(
-    `${ids.length === 1 ? 'Group' : 'Groups'} ${quoted(ids)} need ${count} distinct keys between them (counting their same-key couplings), but maxDistinctKeys is ${cap}.`,
+    `${ids.length === 1 ? 'Group' : 'Groups'} ${quoted(ids)} need ${count} distinct keys between them (counting their same-key couplings), but maxDistinctKeys is ${limit}.`,
     ids,
   );
 }
 
-function result(p: IndexedProblem, chosen: IndexedCandidate[], status: 'optimal' | 'feasible', gap: number | null): SelectionResult {
+function result(p: IndexedProblem, chosen: IndexedCandidate[], status: 'optimal' | 'feasible', gap: number | null, bound?: number): SelectionResult {
   const choice: Record<string, string> = {};
   p.groups.forEach((group, gi) => {
     const entry = chosen[gi];
     if (entry) choice[group.id] = entry.candidate.id;
   });
-  return { status, choice, objective: totalCost(chosen.map((e) => e.candidate)), gap, explanation: null, conflictingGroups: [] };
+  const out: SelectionResult = { status, choice, objective: totalCost(chosen.map((e) => e.candidate), p.distinctKeyCost), gap, explanation: null, conflictingGroups: [] };
+  if (bound !== undefined) out.bound = bound;
+  return out;
 }
 
 /**
@@ -252,21 +278,23 @@ export async function solveSelection(problem: SelectionProblem, options: SolveOp
   const g = await glpk();
   let allowed = pruneCandidates(p);
   const first = run(g, buildModel(g, p, allowed, { objective: 'cost', keyCap: true, binaries: true }), deadline);
-  if (first.kind === 'infeasible') return explainKeyCap(g, problem, p.maxDistinctKeys ?? 0, deadline);
+  if (first.kind === 'infeasible') return explainInfeasible(g, problem, p.maxDistinctKeys, deadline);
   if (first.kind === 'timeout') {
     throw new OptimiserError('NO_SOLUTION_WITHIN_TIME_LIMIT', `No admissible selection was found within the time limit of ${limit} s.`, 'timeLimitSeconds');
   }
   let chosen = readChoice(p, allowed, first.values);
   if (first.kind === 'feasible') {
+    // glpk.js gives no branch-and-bound bound: the LP relaxation's optimum is a valid lower bound.
     const relaxation = run(g, buildModel(g, p, allowed, { objective: 'cost', keyCap: true, binaries: false }), undefined);
-    const objective = totalCost(chosen.map((e) => e.candidate));
-    const gap = relaxation.kind === 'optimal' ? Math.max(0, objective - relaxation.z) / Math.max(Math.abs(objective), 1e-9) : null;
-    return result(p, chosen, 'feasible', gap);
+    const objective = totalCost(chosen.map((e) => e.candidate), p.distinctKeyCost);
+    if (relaxation.kind !== 'optimal') return result(p, chosen, 'feasible', null);
+    const gap = Math.max(0, objective - relaxation.z) / Math.max(Math.abs(objective), 1e-9);
+    return result(p, chosen, 'feasible', gap, relaxation.z);
   }
 
   // Deterministic tie break: fix groups in order to their earliest candidate that still allows a
   // total within the tie tolerance of the optimum.
-  const least = totalCost(chosen.map((e) => e.candidate));
+  const least = totalCost(chosen.map((e) => e.candidate), p.distinctKeyCost);
   const costBound = least + tieTolerance(least);
   for (let gi = 0; gi < allowed.length; gi++) {
     const list = allowed[gi] ?? [];
@@ -280,4 +308,18 @@ export async function solveSelection(problem: SelectionProblem, options: SolveOp
     if (fixed) allowed = allowed.map((l, i) => (i === gi ? [fixed] : l));
   }
   return result(p, chosen, 'optimal', 0);
+}
+
+/**
+ * Lower bound on the least total cost: the optimum of the LP relaxation of the model solveSelection
+ * builds (binaries relaxed to 0 <= x, y <= 1, after the same safe pruning). Null when the problem is
+ * infeasible already by its groups or couplings, or the relaxation has no solution.
+ */
+export async function relaxationBound(problem: SelectionProblem): Promise<number | null> {
+  const p = indexProblem(problem);
+  if (immediateInfeasibility(p)) return null;
+  if (p.groups.length === 0) return 0;
+  const g = await glpk();
+  const outcome = run(g, buildModel(g, p, pruneCandidates(p), { objective: 'cost', keyCap: true, binaries: false }), undefined);
+  return outcome.kind === 'optimal' ? outcome.z : null;
 }

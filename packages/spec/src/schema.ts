@@ -46,6 +46,8 @@ function choice<const T extends readonly [string, ...string[]]>(values: T) {
 export const steelGrades = ['S235', 'S275', 'S355', 'S460'] as const;
 export const sectionFamilies = ['IPE', 'HEB'] as const;
 export const wallSurfaceCategories = ['D1', 'D2', 'D3'] as const;
+/** Support scenarios of a ring on columns (docs/input-reference.md, "Support scenarios"). */
+export const supportScenarios = ['column-cap-contact', 'column-cap-bonded', 'columns-under-web'] as const;
 
 export const binSpecInput = z.strictObject(
   {
@@ -97,6 +99,15 @@ export const binSpecInput = z.strictObject(
         segmentsPerSpan: wholeNumber(2, 120, 'segments').default(24),
         grade: choice(steelGrades).default('S355'),
         sectionFamilies: z.array(choice(sectionFamilies), { error: 'must be a list of section families' }).min(1, { error: 'must name at least one section family' }).default(['IPE', 'HEB']),
+        columnSection: text(40).default('HE 200 B'),
+        columnHeight: quantity({ min: 0.5, max: 40, unit: 'm' }).default(5),
+        capPlateLength: quantity({ min: 50, max: 2000, unit: 'mm' }).default(300),
+        bearingPoints: wholeNumber(3, 11, 'bearing points across the flange').default(5),
+        flangeFlexibility: z.boolean({ error: 'must be true or false' }).default(true),
+        credibleScenarios: z
+          .array(choice(supportScenarios), { error: 'must be a list of support scenarios' })
+          .min(1, { error: 'must name at least one credible support scenario' })
+          .default(['column-cap-contact']),
       },
       { error: 'must be a table describing the support' },
     ),

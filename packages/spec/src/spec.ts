@@ -1,6 +1,6 @@
 import { SpecError, type SpecIssue } from './errors.js';
 import { zodIssues } from './issues.js';
-import { binSpecInput, type BinSpecParsed } from './schema.js';
+import { binSpecInput, type BinSpecParsed, type supportScenarios } from './schema.js';
 import { resolveStoredSolid, type StoredSolid } from './solids.js';
 import { degToRad, knPerM3ToNPerM3, mmToM } from './units.js';
 
@@ -31,6 +31,14 @@ export interface BinSpec {
     segmentsPerSpan: number;
     grade: 'S235' | 'S275' | 'S355' | 'S460';
     sectionFamilies: Array<'IPE' | 'HEB'>;
+    /** Rolled section of the columns (EN 10365 designation), for the cap bearing stiffness. */
+    columnSection: string;
+    columnHeight: number;
+    /** Length of the column cap plate along the girder, m. */
+    capPlateLength: number;
+    bearingPoints: number;
+    flangeFlexibility: boolean;
+    credibleScenarios: Array<(typeof supportScenarios)[number]>;
   };
   actions: { permanentFactor: number; solidFactor: number };
 }
@@ -102,6 +110,12 @@ export function normaliseSpec(document: unknown): BinSpec {
       segmentsPerSpan: input.support.segmentsPerSpan,
       grade: input.support.grade,
       sectionFamilies: [...new Set(input.support.sectionFamilies)],
+      columnSection: input.support.columnSection,
+      columnHeight: input.support.columnHeight,
+      capPlateLength: mmToM(input.support.capPlateLength),
+      bearingPoints: input.support.bearingPoints,
+      flangeFlexibility: input.support.flangeFlexibility,
+      credibleScenarios: [...new Set(input.support.credibleScenarios)],
     },
     actions: input.actions,
   };

@@ -44,6 +44,8 @@ export interface CheckResult {
   intermediate: Record<string, number>;
   /** set when the check cannot be made by these rules (e.g. a class 4 section); utilisation is then Infinity */
   outOfScope?: string;
+  /** advice that follows from the result, e.g. "web stiffener needed" */
+  notes?: string[];
 }
 
 /** A section the checks can use: dimensions and properties (a SteelSection fits). */
@@ -127,7 +129,8 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
   const momentResistanceZ = (plastic ? p.plasticModulusZ : p.elasticModulusZ) * designStrength;
 
   // EN 1993-1-1 6.2.6(2): V_pl,Rd = A_v (f_y / sqrt 3) / gamma_M0.
-  const shearAreaZ = shearAreaParallelToWeb(section.dimensions, eta);
+  // 6.2.6(3)d for welded I sections (fillet welds ignored): A_v = eta h_w t_w.
+  const shearAreaZ = section.fabrication === 'welded' ? eta * p.webDepth * tw : shearAreaParallelToWeb(section.dimensions, eta);
   const shearAreaY = p.shearAreaY;
   const shearStrength = designStrength / Math.sqrt(3);
   const shearResistanceZ = shearAreaZ * shearStrength;

@@ -4,9 +4,14 @@ import type { ISectionDimensions, SectionProperties } from './properties.js';
 
 export type SectionClass = 1 | 2 | 3 | 4;
 
+/** How the section was made: decides shear areas and the buckling curves of EN 1993-1-1 Tables 6.2, 6.4, 6.5. */
+export type Fabrication = 'rolled' | 'welded';
+
 /** What a classification needs of a section. */
 export interface ClassifiableSection {
   designation?: string;
+  /** 'rolled' unless stated; a welded section has rootRadius 0 (weld throats ignored) */
+  fabrication?: Fabrication;
   dimensions: ISectionDimensions;
   properties: SectionProperties;
 }

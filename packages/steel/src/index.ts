@@ -7,6 +7,44 @@ export type { SectionSeries, SteelSection } from './sections.js';
 export { steelGrade, steelGradeNames, strengthsForThickness } from './grades.js';
 export type { SteelGrade, SteelGradeOptions, StrengthBand } from './grades.js';
 export { classifySection, sectionYieldStrength } from './classification.js';
-export type { ClassifiableSection, CombinedClassification, ElementClassification, SectionClass, SectionClassification } from './classification.js';
+export type { ClassifiableSection, CombinedClassification, Fabrication, ElementClassification, SectionClass, SectionClassification } from './classification.js';
 export { checkSection, governingCheck } from './checks.js';
 export type { CheckableSection, CheckOptions, CheckResult, InternalForces } from './checks.js';
+export {
+  bucklingReductionFactor,
+  checkBendingAndAxialCompression,
+  checkFlexuralBuckling,
+  checkLateralTorsionalBuckling,
+  correctionFactorKc,
+  criticalMomentForkSupports,
+  effectiveLengthFactor,
+  equivalentMomentFactorC1,
+  equivalentUniformMomentFactor,
+  flexuralBucklingCurve,
+  flexuralBucklingFactors,
+  imperfectionFactor,
+  lateralTorsionalBucklingCurve,
+  lateralTorsionalBucklingFactors,
+} from './buckling.js';
+export type {
+  BeamColumnOptions,
+  BucklingCurve,
+  ColumnBucklingOptions,
+  ColumnEnds,
+  FlexuralBucklingAxis,
+  FlexuralBucklingFactors,
+  LateralTorsionalBucklingFactors,
+  LateralTorsionalBucklingOptions,
+  MemberSection,
+  MomentShape,
+} from './buckling.js';
+export { checkAnchorTension, checkConcreteBearing, checkDeflection, checkFlangeLocalBending, checkPatchLoading, checkTwist } from './local.js';
+export type { ConcreteBearingInput, FlangeContactInput, PatchLoadingInput, PatchLoadType } from './local.js';
+export { checkJunctionRingCompression, checkRingInPlaneBuckling, junctionEffectiveSection } from './junction.js';
+export type { JunctionEffectiveSection, TransitionJunction } from './junction.js';
+export { generateWeldedSections, standardFlangeThicknesses, standardWebThicknesses, weldedISection } from './welded.js';
+export type { WeldedGirderLimits, WeldedPlates, WeldedSection } from './welded.js';
+export { listSections, sectionFamilies } from './catalogue.js';
+export type { SectionFamily, SectionListing } from './catalogue.js';
+export { channelProperties, channelSection, checkChannelSecondaryMember, loadChannels } from './channels.js';
+export type { ChannelDimensions, ChannelProperties, ChannelSection } from './channels.js';

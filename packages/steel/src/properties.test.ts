@@ -76,6 +76,19 @@ describe('section properties from EN 10365 dimensions', () => {
   ];
   it.each(fromMemory)('$designation matches the producer table (from memory)', (row) => expectRow(row));
 
+  // Producer's EN 10365 property tables, HE A and HE M pages, from memory (recalled before these rows
+  // were computed, not re-read from a printed table).
+  const heAandM: PublishedRow[] = [
+    { designation: 'HE 100 A', A: '21.24', Iy: '349.2', Iz: '133.8', Wply: '83.01', It: '5.24', Iw: '2.58' },
+    { designation: 'HE 200 A', A: '53.83', Iy: '3692', Iz: '1336', Wply: '429.5', It: '20.98', Iw: '108.0' },
+    { designation: 'HE 300 A', A: '112.5', Iy: '18260', Iz: '6310', Wply: '1383', It: '85.17', Iw: '1200' },
+    { designation: 'HE 400 A', A: '159.0', Iy: '45070', Iz: '8564', Wply: '2562', It: '189.0', Iw: '2942' },
+    { designation: 'HE 100 M', A: '53.24', Iy: '1143', Iz: '399.2', Wply: '235.8', It: '68.21', Iw: '9.925' },
+    { designation: 'HE 200 M', A: '131.3', Iy: '10640', Iz: '3651', Wply: '1135', It: '259.4', Iw: '346.3' },
+    { designation: 'HE 300 M', A: '303.1', Iy: '59200', Iz: '19400', Wply: '4078', It: '1408', Iw: '4386' },
+  ];
+  it.each(heAandM)('$designation matches the producer table (from memory)', (row) => expectRow(row));
+
   it('IPE 300 secondary properties match the producer table (from memory)', () => {
     // Producer's IPE table, IPE 300 row, from memory: W_el,y 557.1, W_el,z 80.50 cm3, i_y 12.46, i_z 3.35 cm,
     // W_pl,z 125.2 cm3, A_vz 25.68 cm2, G 42.2 kg/m.
@@ -154,7 +167,7 @@ describe('section properties from EN 10365 dimensions', () => {
 
   it('every table row gives properties that grow with size within a series', () => {
     const sections = loadRolledSections();
-    for (const series of ['IPE', 'HE B'] as const) {
+    for (const series of ['IPE', 'HE A', 'HE B', 'HE M'] as const) {
       const rows = sections.filter((s) => s.series === series);
       for (let i = 1; i < rows.length; i++) {
         const previous = rows[i - 1];

@@ -3,14 +3,15 @@ import { loadRolledSections, parseRolledSectionTable, rolledSection } from './se
 import { SteelError } from './errors.js';
 
 describe('rolled-section table', () => {
-  it('holds the full IPE 80-600 and HE 100 B-1000 B series of EN 10365', () => {
+  it('holds the full IPE 80-600 and HE 100-1000 A, B and M series of EN 10365', () => {
     const names = loadRolledSections().map((s) => s.designation);
     // EN 10365:2017 IPE series (18 sizes) and HE B series (24 sizes), from memory.
     const ipe = [80, 100, 120, 140, 160, 180, 200, 220, 240, 270, 300, 330, 360, 400, 450, 500, 550, 600].map((n) => `IPE ${n}`);
     const heb = [100, 120, 140, 160, 180, 200, 220, 240, 260, 280, 300, 320, 340, 360, 400, 450, 500, 550, 600, 650, 700, 800, 900, 1000].map(
       (n) => `HE ${n} B`,
     );
-    expect(names).toEqual([...ipe, ...heb]);
+    const sizes = [100, 120, 140, 160, 180, 200, 220, 240, 260, 280, 300, 320, 340, 360, 400, 450, 500, 550, 600, 650, 700, 800, 900, 1000];
+    expect(names).toEqual([...ipe, ...heb, ...sizes.map((n) => `HE ${n} A`), ...sizes.map((n) => `HE ${n} M`)]);
     expect(loadRolledSections().every((s) => s.source.length > 0)).toBe(true);
   });
 
@@ -23,7 +24,7 @@ describe('rolled-section table', () => {
 
   it('reports an unknown designation by code and message', () => {
     expect(() => rolledSection('IPE 310')).toThrowError(
-      new SteelError('UNKNOWN_SECTION', 'Section "IPE 310" is not in the rolled-section table (IPE 80 to IPE 600, HE 100 B to HE 1000 B).', 'section'),
+      new SteelError('UNKNOWN_SECTION', 'Section "IPE 310" is not in the rolled-section table (IPE 80 to IPE 600; HE 100 A/B/M to HE 1000 A/B/M).', 'section'),
     );
   });
 

@@ -4,7 +4,7 @@ import { SteelError } from './errors.js';
 import { sectionProperties } from './properties.js';
 import type { ISectionDimensions, SectionProperties } from './properties.js';
 
-export type SectionSeries = 'IPE' | 'HE B';
+export type SectionSeries = 'IPE' | 'HE A' | 'HE B' | 'HE M';
 
 /** A rolled section ready for design: SI dimensions, computed properties and where the row came from. */
 export interface SteelSection {
@@ -21,8 +21,8 @@ const positiveMm = z.number().finite().positive();
 
 const rolledSectionRow = z
   .object({
-    designation: z.string().regex(/^(IPE \d+|HE \d+ B)$/, 'designation must read like "IPE 300" or "HE 300 B"'),
-    series: z.enum(['IPE', 'HE B']),
+    designation: z.string().regex(/^(IPE \d+|HE \d+ [ABM])$/, 'designation must read like "IPE 300", "HE 300 A", "HE 300 B" or "HE 300 M"'),
+    series: z.enum(['IPE', 'HE A', 'HE B', 'HE M']),
     depthMm: positiveMm,
     flangeWidthMm: positiveMm,
     webThicknessMm: positiveMm,
@@ -31,7 +31,7 @@ const rolledSectionRow = z
     source: z.string().min(1),
   })
   .strict()
-  .refine((row) => row.designation.startsWith(row.series === 'IPE' ? 'IPE ' : 'HE '), {
+  .refine((row) => (row.series === 'IPE' ? row.designation.startsWith('IPE ') : row.designation.startsWith('HE ') && row.designation.endsWith(row.series.slice(-1))), {
     message: 'designation does not belong to the stated series',
   })
   .refine((row) => row.depthMm - 2 * row.flangeThicknessMm - 2 * row.rootRadiusMm > 0, {
@@ -87,7 +87,7 @@ export function parseRolledSectionTable(data: unknown): SteelSection[] {
 
 let cachedSections: readonly SteelSection[] | undefined;
 
-/** The EN 10365 IPE and HE B sections shipped with the package, lightest first within each series. */
+/** The EN 10365 IPE, HE B, HE A and HE M sections shipped with the package (in that order), lightest first within each series. */
 export function loadRolledSections(): SteelSection[] {
   cachedSections ??= Object.freeze(
     parseRolledSectionTable(rolledSectionTable).map((section) =>
@@ -113,7 +113,7 @@ export function rolledSection(designation: string): SteelSection {
   if (!found) {
     throw new SteelError(
       'UNKNOWN_SECTION',
-      `Section "${designation}" is not in the rolled-section table (IPE 80 to IPE 600, HE 100 B to HE 1000 B).`,
+      `Section "${designation}" is not in the rolled-section table (IPE 80 to IPE 600; HE 100 A/B/M to HE 1000 A/B/M).`,
       'section',
     );
   }

@@ -1,0 +1,239 @@
+import type { ClassifiableSection } from './classification.js';
+import type { CheckResult } from './checks.js';
+import { SteelError } from './errors.js';
+import { strengthsForThickness } from './grades.js';
+import type { SteelGrade } from './grades.js';
+
+function positive(name: string, value: number): number {
+  if (!Number.isFinite(value) || value <= 0) throw new SteelError('INVALID_OPTIONS', `${name} must be a positive number in SI units; got ${value}.`, name);
+  return value;
+}
+
+function nonNegative(name: string, value: number): number {
+  if (!Number.isFinite(value) || value < 0) throw new SteelError('INVALID_FORCES', `${name} must be zero or a positive number in SI units; got ${value}.`, name);
+  return value;
+}
+
+function ratio(effect: number, resistance: number): number {
+  if (effect === 0) return 0;
+  return resistance > 0 ? effect / resistance : Number.POSITIVE_INFINITY;
+}
+
+/** How a transverse force enters the web, EN 1993-1-5 Figure 6.1. */
+export type PatchLoadType = 'a' | 'b' | 'c';
+
+export interface PatchLoadingInput {
+  /** F_Ed, the transverse force on the flange [N] (magnitude) */
+  force: number;
+  /** s_s, stiff bearing length along the girder [m] (EN 1993-1-5 6.3) */
+  stiffBearingLength: number;
+  /**
+   * 'a' (default): force through one flange, resisted by web shear; 'b': applied to one flange and
+   * carried through the web straight to the other (e.g. a column directly below a point load);
+   * 'c': near an unstiffened end, resisted by web shear.
+   */
+  type?: PatchLoadType;
+  /** a, spacing of transverse stiffeners [m]; omitted for an unstiffened web (h_w/a taken as 0, no cap on l_y) */
+  stiffenerSpacing?: number;
+  /** c, distance from the end of the stiff bearing to the member end [m] (type c only) */
+  endDistance?: number;
+}
+
+/**
+ * Resistance of the web to a transverse force (patch loading), EN 1993-1-5 section 6 (REFERENCES section 6):
+ *   k_F = 6 + 2 (h_w/a)^2 (type a), 3.5 + 2 (h_w/a)^2 (type b), 2 + 6 (s_s + c)/h_w <= 6 (type c);
+ *   F_cr = 0.9 k_F E t_w^3 / h_w;
+ *   m1 = f_yf b_f / (f_yw t_w), m2 = 0.02 (h_w/t_f)^2 if lambda_F > 0.5, else 0;
+ *   types a, b: l_y = s_s + 2 t_f (1 + sqrt(m1 + m2)) <= a;
+ *   type c: l_e = k_F E t_w^2 / (2 f_yw h_w) <= s_s + c,
+ *           l_y = min(l_e + t_f sqrt(m1/2 + (l_e/t_f)^2 + m2), l_e + t_f sqrt(m1 + m2));
+ *   lambda_F = sqrt(l_y t_w f_yw / F_cr), chi_F = 0.5 / lambda_F <= 1, L_eff = chi_F l_y,
+ *   F_Rd = f_yw L_eff t_w / gamma_M1; check eta_2 = F_Ed / F_Rd <= 1 (6.6).
+ * h_w is the clear web depth between the flanges (h - 2 t_f). m2 is first taken as for lambda_F > 0.5
+ * and dropped when the resulting lambda_F is 0.5 or less (common practice). Equal flange and web
+ * yield strength (one grade; for rolled sections the flange thickness decides). A utilisation above 1
+ * adds the note "web stiffener needed".
+ */
+export function checkPatchLoading(section: ClassifiableSection, grade: SteelGrade, input: PatchLoadingInput): CheckResult {
+  const force = nonNegative('force', Math.abs(input.force));
+  const ss = nonNegative('stiffBearingLength', input.stiffBearingLength);
+  const type = input.type ?? 'a';
+  const { depth: h, flangeWidth: bf, webThickness: tw, flangeThickness: tf } = section.dimensions;
+  const hw = h - 2 * tf;
+  const a = input.stiffenerSpacing === undefined ? Number.POSITIVE_INFINITY : positive('stiffenerSpacing', input.stiffenerSpacing);
+  const c = input.endDistance ?? 0;
+  if (type === 'c') nonNegative('endDistance', c);
+  const E = grade.youngsModulus;
+  const fyw = strengthsForThickness(grade, tw).yieldStrength;
+  const fyf = strengthsForThickness(grade, tf).yieldStrength;
+  const hwOverA = Number.isFinite(a) ? hw / a : 0;
+  const kF = type === 'a' ? 6 + 2 * hwOverA ** 2 : type === 'b' ? 3.5 + 2 * hwOverA ** 2 : Math.min(6, 2 + (6 * (ss + c)) / hw);
+  const Fcr = (0.9 * kF * E * tw ** 3) / hw;
+  const m1 = (fyf * bf) / (fyw * tw);
+  const effectiveLoadedLength = (m2: number): number => {
+    if (type === 'c') {
+      const le = Math.min((kF * E * tw ** 2) / (2 * fyw * hw), ss + c);
+      return Math.min(le + tf * Math.sqrt(m1 / 2 + (le / tf) ** 2 + m2), le + tf * Math.sqrt(m1 + m2));
+    }
+    return Math.min(a, ss + 2 * tf * (1 + Math.sqrt(m1 + m2)));
+  };
+  let m2 = 0.02 * (hw / tf) ** 2;
+  let ly = effectiveLoadedLength(m2);
+  let lambdaF = Math.sqrt((ly * tw * fyw) / Fcr);
+  if (lambdaF <= 0.5) {
+    m2 = 0;
+    ly = effectiveLoadedLength(m2);
+    lambdaF = Math.sqrt((ly * tw * fyw) / Fcr);
+  }
+  const chiF = Math.min(1, 0.5 / lambdaF);
+  const Leff = chiF * ly;
+  const FRd = (fyw * Leff * tw) / grade.gammaM1;
+  const utilisation = ratio(force, FRd);
+  const result: CheckResult = {
+    id: 'patch-loading',
+    title: `Web under a transverse force (patch loading, type ${type})`,
+    clause: 'EN 1993-1-5 6.2-6.6',
+    utilisation,
+    inputs: { F_Ed: force, s_s: ss, a: Number.isFinite(a) ? a : 0, ...(type === 'c' ? { c } : {}), h_w: hw, t_w: tw, t_f: tf, b_f: bf, f_yw: fyw, f_yf: fyf, E, gamma_M1: grade.gammaM1 },
+    intermediate: { k_F: kF, F_cr: Fcr, m1, m2, l_y: ly, lambda_F: lambdaF, chi_F: chiF, L_eff: Leff, F_Rd: FRd, stiffenerNeeded: utilisation > 1 ? 1 : 0 },
+  };
+  if (utilisation > 1) result.notes = ['web stiffener needed'];
+  return result;
+}
+
+export interface FlangeContactInput {
+  /** line load on one flange outstand along the girder, e.g. the bearing pressure resultant per metre [N/m] */
+  lineLoad: number;
+  /** distance of that resultant from the web centre line, across the flange [m] */
+  distanceFromWebCentre: number;
+}
+
+/**
+ * Local bending of a flange outstand under a contact line load (common practice: the outstand as a
+ * cantilever from the web root, a yield line along the root):
+ *   m_Ed = q e, e = d - (t_w/2 + r) >= 0 (lever from the root to the resultant at d from the web centre),
+ *   m_pl,Rd = t_f^2 f_y / (4 gamma_M0) per unit length (plastic moment of a plate strip).
+ * Per unit length along the girder; no spread along the girder is assumed, which is conservative for
+ * a short bearing. The resultant must lie on the flange (d <= b/2).
+ */
+export function checkFlangeLocalBending(section: ClassifiableSection, grade: SteelGrade, input: FlangeContactInput): CheckResult {
+  const q = nonNegative('lineLoad', Math.abs(input.lineLoad));
+  const d = nonNegative('distanceFromWebCentre', input.distanceFromWebCentre);
+  const { flangeWidth: b, webThickness: tw, flangeThickness: tf, rootRadius: r } = section.dimensions;
+  if (d > b / 2 * (1 + 1e-9)) {
+    throw new SteelError('INVALID_FORCES', `The contact resultant at ${d} m from the web lies beyond the flange tip (b/2 = ${b / 2} m).`, 'distanceFromWebCentre');
+  }
+  const root = tw / 2 + r;
+  const lever = Math.max(0, d - root);
+  const fy = strengthsForThickness(grade, tf).yieldStrength;
+  const mEd = q * lever;
+  const mRd = (tf ** 2 * fy) / (4 * grade.gammaM0);
+  return {
+    id: 'flange-local-bending',
+    title: 'Local bending of the flange outstand under contact (cantilever from the web root)',
+    clause: 'common practice: yield line at the web root, m_pl = t_f^2 f_y / 4',
+    utilisation: ratio(mEd, mRd),
+    inputs: { q, d, t_f: tf, t_w: tw, r, b, f_y: fy, gamma_M0: grade.gammaM0 },
+    intermediate: { e: lever, m_Ed: mEd, m_pl_Rd: mRd },
+  };
+}
+
+export interface ConcreteBearingInput {
+  /** F_Ed, the compression on the bearing plate [N] */
+  force: number;
+  /** A_c0, loaded area (bearing plate) [m2] */
+  loadedArea: number;
+  /** A_c1, largest design distribution area similar in shape to A_c0 (EN 1992-1-1 Figure 6.29) [m2]; default A_c0 */
+  distributionArea?: number;
+  /** f_ck [Pa] */
+  characteristicStrength: number;
+  /** alpha_cc (recommended 1.0, EN 1992-1-1 3.1.6(1)) */
+  alphaCc?: number;
+  /** gamma_c (recommended 1.5, EN 1992-1-1 Table 2.1N) */
+  gammaC?: number;
+}
+
+/**
+ * Concrete under a bearing plate, EN 1992-1-1 6.7(2): F_Rdu = A_c0 f_cd sqrt(A_c1/A_c0) <= 3.0 f_cd A_c0,
+ * f_cd = alpha_cc f_ck / gamma_c (3.1.6). Assumes uniform pressure on A_c0 and that the geometry
+ * conditions of Figure 6.29 hold for the A_c1 given (the caller's responsibility).
+ */
+export function checkConcreteBearing(input: ConcreteBearingInput): CheckResult {
+  const F = nonNegative('force', Math.abs(input.force));
+  const Ac0 = positive('loadedArea', input.loadedArea);
+  const Ac1 = positive('distributionArea', input.distributionArea ?? Ac0);
+  if (Ac1 < Ac0 * (1 - 1e-12)) throw new SteelError('INVALID_OPTIONS', `distributionArea A_c1 = ${Ac1} m2 must not be smaller than the loaded area A_c0 = ${Ac0} m2.`, 'distributionArea');
+  const fck = positive('characteristicStrength', input.characteristicStrength);
+  const alphaCc = positive('alphaCc', input.alphaCc ?? 1.0);
+  const gammaC = positive('gammaC', input.gammaC ?? 1.5);
+  const fcd = (alphaCc * fck) / gammaC;
+  const spread = Ac0 * fcd * Math.sqrt(Ac1 / Ac0);
+  const cap = 3.0 * fcd * Ac0;
+  const FRdu = Math.min(spread, cap);
+  return {
+    id: 'concrete-bearing',
+    title: 'Concrete bearing under the bearing plate (partially loaded area)',
+    clause: 'EN 1992-1-1 6.7',
+    utilisation: ratio(F, FRdu),
+    inputs: { F_Ed: F, A_c0: Ac0, A_c1: Ac1, f_ck: fck, alpha_cc: alphaCc, gamma_c: gammaC },
+    intermediate: { f_cd: fcd, 'A_c0 f_cd sqrt(A_c1/A_c0)': spread, '3.0 f_cd A_c0': cap, F_Rdu: FRdu },
+  };
+}
+
+/**
+ * Anchor in tension: the design tension per anchor against a design resistance per anchor that the
+ * user supplies (resistance per EN 1992-4, supplied by the user; no failure modes are computed here).
+ */
+export function checkAnchorTension(input: { tensionPerAnchor: number; resistancePerAnchor: number }): CheckResult {
+  const N = input.tensionPerAnchor;
+  if (!Number.isFinite(N)) throw new SteelError('INVALID_FORCES', `tensionPerAnchor must be a finite number in newtons; got ${N}.`, 'tensionPerAnchor');
+  const NRd = positive('resistancePerAnchor', input.resistancePerAnchor);
+  const tension = Math.max(0, N);
+  return {
+    id: 'anchor-tension',
+    title: 'Anchor in tension',
+    clause: 'resistance per EN 1992-4, supplied by the user',
+    utilisation: ratio(tension, NRd),
+    inputs: { N_Ed: N, N_Rd: NRd },
+    intermediate: { tension },
+  };
+}
+
+/**
+ * Deflection limit (serviceability): |delta| <= span / limit. The default span/500 for the support
+ * girder of a bin is common practice (no EN 1993 requirement; EN 1993-1-1 7.2 leaves limits to the
+ * project).
+ */
+export function checkDeflection(input: { deflection: number; span: number; limitRatio?: number }): CheckResult {
+  const delta = input.deflection;
+  if (!Number.isFinite(delta)) throw new SteelError('INVALID_FORCES', `deflection must be a finite length in metres; got ${delta}.`, 'deflection');
+  const span = positive('span', input.span);
+  const limitRatio = positive('limitRatio', input.limitRatio ?? 500);
+  const allowed = span / limitRatio;
+  return {
+    id: 'deflection',
+    title: `Deflection limit span/${limitRatio}`,
+    clause: 'EN 1993-1-1 7.2 (limit by common practice)',
+    utilisation: ratio(Math.abs(delta), allowed),
+    inputs: { delta, L: span, limitRatio },
+    intermediate: { delta_max: allowed },
+  };
+}
+
+/**
+ * Twist limit (serviceability): |phi| <= phi_max, default 0.01 rad (common practice, user-set; it keeps
+ * the hopper junction and the bearings from seeing large rotations).
+ */
+export function checkTwist(input: { twist: number; limit?: number }): CheckResult {
+  const phi = input.twist;
+  if (!Number.isFinite(phi)) throw new SteelError('INVALID_FORCES', `twist must be a finite angle in radians; got ${phi}.`, 'twist');
+  const limit = positive('limit', input.limit ?? 0.01);
+  return {
+    id: 'twist',
+    title: 'Twist limit',
+    clause: 'serviceability limit by common practice',
+    utilisation: ratio(Math.abs(phi), limit),
+    inputs: { phi, phi_max: limit },
+    intermediate: {},
+  };
+}
