@@ -4,7 +4,7 @@ import { solveSelection } from '@binsupport/optimiser';
 import type { BinSpec } from '@binsupport/spec';
 import { loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
 import { DesignError } from './errors.js';
-import { envelopeChecks, governingEnvelope, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
+import { envelopeChecks, exceedsAnywhere, governingEnvelope, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
 import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
 import { SCENARIOS, scenarioSummary, type ScenarioDefinition } from './scenarios.js';
@@ -69,7 +69,16 @@ export interface DesignContext {
 
 export function loadsFor(spec: BinSpec): LoadSet {
   try {
-    return circularBinLoads({ bin: spec.bin, solid: spec.solid, partialFactors: spec.actions });
+    return circularBinLoads({
+      bin: spec.bin,
+      solid: spec.solid,
+      partialFactors: { permanentFactor: spec.actions.permanentFactor, solidFactor: spec.actions.solidFactor, variableFactor: spec.actions.variableFactor, method: spec.actions.combinationMethod },
+      ...(spec.roof ? { roof: spec.roof } : {}),
+      ...(spec.snow ? { snow: spec.snow } : {}),
+      ...(spec.wind ? { wind: spec.wind } : {}),
+      ...(spec.seismic ? { seismic: spec.seismic } : {}),
+      ...(spec.equipment.length > 0 ? { equipment: spec.equipment } : {}),
+    });
   } catch (error) {
     if (error instanceof LoadsError) throw new DesignError('BAD_INPUT', error.message, error.path);
     throw error;
@@ -87,7 +96,17 @@ function guardEquilibrium(analysis: AnalysisResult, scenario: string): void {
   }
 }
 
-export function analyseScenario(context: DesignContext, section: SteelSection, scenario: ScenarioDefinition, limitStates: Array<'ULS' | 'SLS'> = ['ULS', 'SLS']): ScenarioAnalysis {
+/**
+ * The combinations that size members: ultimate limit states of resistance (STR, and seismic where
+ * given). EQU combinations (EN 1990 6.4.3.1, static equilibrium) are analysed and reported, for uplift
+ * and anchors, but do not size the girder's cross-section.
+ */
+export function sizingCombinations(loads: LoadSet): Set<string> {
+  return new Set(loads.combinations.filter((combination) => combination.limitState === 'ULS' && combination.verification !== 'EQU').map((combination) => combination.name));
+}
+
+/** Analyse one scenario under the combinations named in `only` (default: all of them). */
+export function analyseScenario(context: DesignContext, section: SteelSection, scenario: ScenarioDefinition, only?: Set<string>): ScenarioAnalysis {
   const { spec, loads, layout, grade } = context;
   const model = buildRingModel({
     layout,
@@ -97,7 +116,7 @@ export function analyseScenario(context: DesignContext, section: SteelSection, s
     selfWeightCase: PERMANENT_CASE,
     columnSupport: scenario.columnSupport(section, context.column, spec, grade),
   });
-  const analyses = loads.combinations.filter((combination) => limitStates.includes(combination.limitState)).map((combination) => {
+  const analyses = loads.combinations.filter((combination) => only === undefined || only.has(combination.name)).map((combination) => {
     let analysis: AnalysisResult;
     try {
       analysis = analyse(model, { name: combination.name, factors: combination.factors }, { stationsPerElement: context.stationsPerElement });
@@ -114,15 +133,15 @@ export function analyseScenario(context: DesignContext, section: SteelSection, s
 }
 
 function ulsStations(context: DesignContext, scenarios: ScenarioAnalysis[]): StationSet[] {
-  const uls = new Set(context.loads.combinations.filter((combination) => combination.limitState === 'ULS').map((combination) => combination.name));
+  const uls = sizingCombinations(context.loads);
   return scenarios.flatMap(({ scenario, analyses }) =>
     analyses.filter((analysis) => uls.has(analysis.combination)).map((analysis) => ({ combination: analysis.combination, scenario: scenario.id, stations: analysis.stations })),
   );
 }
 
-/** Analyse a section under the given scenarios; the sizing loop needs only the ULS combinations. */
-export function analyseSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], limitStates: Array<'ULS' | 'SLS'> = ['ULS']): SectionAnalysis {
-  const analysed = scenarios.map((scenario) => analyseScenario(context, section, scenario, limitStates));
+/** Analyse a section under the given scenarios and the sizing combinations (or only those named). */
+export function analyseSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string> = sizingCombinations(context.loads)): SectionAnalysis {
+  const analysed = scenarios.map((scenario) => analyseScenario(context, section, scenario, only));
   const uls = ulsStations(context, analysed);
   const envelopes = envelopeChecks(section, context.grade, uls);
   return { section, scenarios: analysed, uls, envelopes, utilisation: maxUtilisation(envelopes) };
@@ -237,9 +256,12 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     // the heavier ones are pruned as dominated before the integer program (they stay unevaluated).
     const evaluated: Array<{ section: SteelSection; utilisation: number }> = [];
     for (const section of candidates) {
-      const utilisation = maxUtilisation(envelopeChecks(section, grade, state.uls));
-      evaluated.push({ section, utilisation });
-      if (utilisation <= 1) break;
+      if (exceedsAnywhere(section, grade, state.uls)) {
+        evaluated.push({ section, utilisation: Infinity });
+        continue;
+      }
+      evaluated.push({ section, utilisation: maxUtilisation(envelopeChecks(section, grade, state.uls)) });
+      break;
     }
     feasibleCount = evaluated.filter((entry) => entry.utilisation <= 1).length;
     const selection = await solveSelection({
@@ -269,15 +291,21 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   // with its own section, lightest first, and take the first that passes.
   const loopBest = [...analysed.values()].filter((entry) => entry.utilisation <= 1).sort((a, b) => a.section.properties.massPerMetre - b.section.properties.massPerMetre)[0];
   if (loopBest) {
+    // A lighter section that fails under a few combinations fails under all of them, so each is
+    // first analysed under the combinations that govern the loop's answer, and fully only if it passes.
+    const governingCombinations = new Set([...loopBest.envelopes].sort((a, b) => b.check.utilisation - a.check.utilisation).map((envelope) => envelope.combination).slice(0, 3));
     let round = steps.length;
     for (const section of candidates) {
       if (section.properties.massPerMetre >= loopBest.section.properties.massPerMetre) break;
-      const wasAnalysed = analysed.has(section.designation);
-      const state = analyseCached(section);
-      if (!wasAnalysed) {
-        round += 1;
-        steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(state.utilisation) });
+      if (analysed.has(section.designation)) continue;
+      const screen = analyseSection(context, section, credible, governingCombinations);
+      round += 1;
+      if (screen.utilisation > 1) {
+        steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(screen.utilisation) });
+        continue;
       }
+      const state = analyseCached(section);
+      steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(state.utilisation) });
       if (state.utilisation <= 1) {
         progress(`descent: the lighter ${section.designation} passes under its own forces (utilisation ${state.utilisation.toFixed(3)})`);
         break;
@@ -301,7 +329,11 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   if (!firstModel) throw new DesignError('ANALYSIS_FAILED', 'no credible support scenario was analysed');
   const positionFor = (station: Station) => positionOf(firstModel, layout, station);
   // The scenarios not in the envelope are analysed with the chosen section and reported beside it.
-  const allScenarios = [...credible, ...comparison].map((scenario) => analyseScenario(context, final.section, scenario));
+  // Reported analyses: every ULS combination (STR and EQU) and the characteristic gravity
+  // combination G + Q_s,f (the load-total guard). The other SLS combinations are listed but not yet
+  // analysed, since no serviceability check is made in this version.
+  const reported = new Set(loads.combinations.filter((combination) => combination.limitState === 'ULS' || isGravityCheck(combination)).map((combination) => combination.name));
+  const allScenarios = [...credible, ...comparison].map((scenario) => analyseScenario(context, final.section, scenario, reported));
   for (const scenario of allScenarios) guardLoadTotals(final.section, scenario, loads, girderLength);
   const member: MemberResult = {
     id: MEMBER_ID,
@@ -423,9 +455,13 @@ function finiteOrNull(value: number): number | null {
 }
 
 /** The vertical load of the characteristic combination equals solid + plates + girder (guard). */
+/** The gravity check combination G + Q_s,f with factors 1 (the loads package lists it first). */
+function isGravityCheck(combination: LoadSet['combinations'][number]): boolean {
+  return Object.keys(combination.factors).length === 2 && combination.factors[PERMANENT_CASE] === 1 && combination.factors[SOLID_FILLING_CASE] === 1;
+}
+
 function guardLoadTotals(section: SteelSection, scenario: ScenarioAnalysis, loads: LoadSet, girderLength: number): void {
-  // The gravity check combination G + Q_s,f (all factors 1), which the loads package lists first.
-  const check = loads.combinations.find((combination) => Object.keys(combination.factors).length === 2 && combination.factors[PERMANENT_CASE] === 1 && combination.factors[SOLID_FILLING_CASE] === 1);
+  const check = loads.combinations.find(isGravityCheck);
   const analysis = scenario.analyses.find((candidate) => candidate.combination === check?.name);
   if (!analysis) throw new DesignError('GUARD_FAILED', 'load-total guard: no combination G + Q_s,f with factors 1 was analysed');
   const expected = loads.totals.solidWeight + loads.totals.structureWeight + section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;

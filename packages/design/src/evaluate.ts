@@ -51,3 +51,17 @@ export function governingEnvelope(envelopes: CheckEnvelope[]): CheckEnvelope | u
   return governing;
 }
 
+
+/**
+ * Whether any check of the section exceeds utilisation 1 at any station: stops at the first excess,
+ * visiting the stations of each analysis in order of decreasing strong-axis moment, so that sections
+ * far too light are rejected after a handful of evaluations.
+ */
+export function exceedsAnywhere(section: SteelSection, grade: SteelGrade, sets: StationSet[]): boolean {
+  const ordered = sets.flatMap((set) => set.stations).sort((a, b) => Math.abs(b.My) - Math.abs(a.My) || Math.abs(b.B) - Math.abs(a.B));
+  for (const station of ordered) {
+    const results = checkSection(section, grade, { N: station.N, Vy: station.Vy, Vz: station.Vz, Tsv: station.Tsv, Tw: station.Tw, My: station.My, Mz: station.Mz, B: station.B });
+    if (results.some((check) => !(check.utilisation <= 1))) return true;
+  }
+  return false;
+}

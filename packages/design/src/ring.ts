@@ -1,5 +1,5 @@
 import type { ElementLineLoad, GirderModel, LoadCase, NodalLoad, PointSpring, SectionStiffness, Support, Vec3 } from '@binsupport/girder';
-import type { SupportLineCase } from '@binsupport/loads';
+import { lineLoadAt, type SupportLineCase } from '@binsupport/loads';
 
 /** A ring girder on equally spaced columns: the plan data the model builder needs (SI). */
 export interface RingLayout {
@@ -135,20 +135,24 @@ export function buildRingModel(input: RingModelInput): GirderModel {
   const segmentAngle = (2 * Math.PI) / N;
   const chord = 2 * R * Math.sin(segmentAngle / 2);
   const loadCases: LoadCase[] = input.cases.map((loadCase) => {
-    // Resultants of the case on one segment's (or one node's) arc of the support line.
+    // Resultants of the case on one segment's (or one node's) arc of the support line. The line
+    // loads vary around the line (harmonics: patch loads, wind, seismic); the vertical load is taken
+    // at each segment's mid-angle, the radial and tangential loads at each node's angle.
     const arcOfLine = loadCase.lineRadius * segmentAngle;
-    const verticalPerNode = loadCase.verticalLineLoad * arcOfLine;
-    const radialPerNode = loadCase.radialLineLoad * arcOfLine;
     const radialOffset = loadCase.lineRadius - R;
-    const lineLoads: ElementLineLoad[] = elements.map((element) => ({ element: element.id, q: [0, 0, -verticalPerNode / chord] }));
+    const lineLoads: ElementLineLoad[] = elements.map((element, k) => ({ element: element.id, q: [0, 0, -(lineLoadAt(loadCase, (k + 0.5) * segmentAngle).vertical * arcOfLine) / chord] }));
     const nodalLoads: NodalLoad[] = nodes.map((node, k) => {
       const angle = nodeAngle(layout, k);
+      const at = lineLoadAt(loadCase, angle);
       const outward: Vec3 = [Math.cos(angle), Math.sin(angle), 0];
-      const force: Vec3 = [-radialPerNode * outward[0], -radialPerNode * outward[1], 0];
+      const tangent: Vec3 = [-Math.sin(angle), Math.cos(angle), 0];
+      const radialPerNode = at.radial * arcOfLine;
+      const tangentialPerNode = at.tangential * arcOfLine;
+      const force: Vec3 = [-radialPerNode * outward[0] + tangentialPerNode * tangent[0], -radialPerNode * outward[1] + tangentialPerNode * tangent[1], 0];
       // Moment about the centroid of the loads at their line of action, offset e from the centroid:
-      // e x F for the pull (at the top flange) plus e x (vertical load), e = (lineRadius - R) r + (h/2) z.
+      // e x (pull, shear and vertical load), e = (lineRadius - R) r + (h/2) z (the top flange).
       const offset: Vec3 = [radialOffset * outward[0], radialOffset * outward[1], sectionDepth / 2];
-      const total: Vec3 = [force[0], force[1], -verticalPerNode];
+      const total: Vec3 = [force[0], force[1], -at.vertical * arcOfLine];
       const moment: Vec3 = [offset[1] * total[2] - offset[2] * total[1], offset[2] * total[0] - offset[0] * total[2], offset[0] * total[1] - offset[1] * total[0]];
       return { node: node.id, force, moment };
     });

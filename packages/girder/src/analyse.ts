@@ -1,81 +1,153 @@
 /**
- * Linear static analysis of one combination: validate, number, assemble, factor, solve, recover.
- * A pure function of (model, combination, options).
+ * Static analysis of load combinations: validate, number, assemble, solve the contact problem
+ * (contact.ts; a single linear solve when every spring is bilateral), check, recover.
+ * A pure function of (model, combinations, options): the contact state belongs to each result.
  */
-import { addSpringStiffness, assembleLoads, assembleStiffness, prepareElements, prepareSprings, springElongation } from './assemble.js';
+import type { PreparedElement, PreparedSpring } from './assemble.js';
+import { assembleLoads, prepareElements, prepareSprings, springElongation } from './assemble.js';
+import type { ContactOptions, ContactSystem } from './contact.js';
+import { AT_CAPACITY, ELASTIC, OPEN, prepareContactSystem, solveContact, stateMatrix } from './contact.js';
 import { resultantsAlong } from './element.js';
 import { GirderError } from './errors.js';
-import { combineLoads, sumLoads } from './loads.js';
+import { combineLoads, resultantOfLoads } from './loads.js';
 import type { Combination, GirderModel, Vec3 } from './model.js';
 import { DOFS, DOFS_PER_NODE } from './model.js';
+import type { EquationNumbering } from './numbering.js';
 import { numberEquations } from './numbering.js';
-import type { AnalysisResult, NodeDisplacement, SpringForce, Station, SupportReaction } from './results.js';
-import { factorSystem, solveChecked } from './solve.js';
+import type { AnalysisResult, BearingGroupContact, ContactSummary, NodeDisplacement, SpringForce, Station, SupportReaction } from './results.js';
+import { solveChecked } from './solve.js';
 import { add, cross } from './vector.js';
 import { validateCombination, validateModel } from './validate.js';
 
 export interface AnalysisOptions {
   /** Stations per element including both ends, at equal spacing; integer ≥ 2, default 5. */
   stationsPerElement?: number;
+  /** Cap on linear solves of the contact iteration per combination, default 100. */
+  maxContactIterations?: number;
+  /** Unilateral springs that start in contact (default: all); see ContactOptions. */
+  initialActiveSprings?: readonly string[];
+  /** Fall back to the globalised Newton method on a cycle or singular state (default true). */
+  contactFallback?: boolean;
+  /** Relative elongation tolerance of the contact state, default 1e-9 (ContactOptions.tolerance). */
+  contactTolerance?: number;
 }
 
-export function analyse(model: GirderModel, combination: Combination, options: AnalysisOptions = {}): AnalysisResult {
+interface PreparedAnalysis {
+  numbering: EquationNumbering;
+  elements: PreparedElement[];
+  /** ke and T of each element as row-major 14×14 arrays (recovery runs per element per combination). */
+  keFlat: Float64Array[];
+  TFlat: Float64Array[];
+  springs: PreparedSpring[];
+  system: ContactSystem;
+}
+
+function describer(model: GirderModel, numbering: EquationNumbering): (equation: number) => { text: string; path: string } {
+  const privateOwner = new Map<number, string>();
+  numbering.elementWarpingSlot.forEach((slot, k) => {
+    if (slot >= numbering.nodeCount * DOFS_PER_NODE) {
+      const e = k >> 1;
+      privateOwner.set(slot, `element ${model.elements[e]?.id ?? e} end ${k % 2 === 0 ? 'I' : 'J'} dof w (warping released)`);
+    }
+  });
+  return (equation) => {
+    const slot = numbering.equationSlot[equation] as number;
+    const owner = privateOwner.get(slot);
+    if (owner !== undefined) return { text: owner, path: 'elements' };
+    const n = Math.floor(slot / DOFS_PER_NODE);
+    const node = model.nodes[n];
+    return { text: `node ${node?.id ?? n} dof ${DOFS[slot % DOFS_PER_NODE]}`, path: `nodes[${n}]` };
+  };
+}
+
+function prepare(model: GirderModel): PreparedAnalysis {
   validateModel(model);
-  validateCombination(model, combination);
+  const numbering = numberEquations(model);
+  const elements = prepareElements(model, numbering);
+  const springs = prepareSprings(model, numbering);
+  const system = prepareContactSystem(model, numbering, elements, springs, describer(model, numbering));
+  return {
+    numbering,
+    elements,
+    keFlat: elements.map((element) => element.ke),
+    TFlat: elements.map((element) => element.T),
+    springs,
+    system,
+  };
+}
+
+function checkOptions(options: AnalysisOptions): number {
   const stationCount = options.stationsPerElement ?? 5;
   if (!Number.isInteger(stationCount) || stationCount < 2) {
     throw new GirderError('BAD_MODEL', `options.stationsPerElement must be an integer of at least 2; got ${stationCount}`, 'options.stationsPerElement');
   }
+  return stationCount;
+}
 
-  const numbering = numberEquations(model);
-  const elements = prepareElements(model, numbering);
-  const springs = prepareSprings(model, numbering);
-  const K = assembleStiffness(elements, numbering);
-  for (const spring of springs) addSpringStiffness(K, numbering, spring);
+/** One combination; see analyseAll. */
+export function analyse(model: GirderModel, combination: Combination, options: AnalysisOptions = {}): AnalysisResult {
+  return analyseAll(model, [combination], options)[0] as AnalysisResult;
+}
 
+/**
+ * Every combination on its own (contact is nonlinear: no superposition), sharing the numbering,
+ * the element matrices and the cache of factorisations by contact state.
+ */
+export function analyseAll(model: GirderModel, combinations: readonly Combination[], options: AnalysisOptions = {}): AnalysisResult[] {
+  const stationCount = checkOptions(options);
+  const prepared = prepare(model);
+  return combinations.map((combination) => analyseOne(model, prepared, combination, stationCount, options));
+}
+
+const STATE_NAMES = { [OPEN]: 'open', [ELASTIC]: 'elastic', [AT_CAPACITY]: 'at-capacity' } as const;
+
+function analyseOne(model: GirderModel, prepared: PreparedAnalysis, combination: Combination, stationCount: number, options: AnalysisOptions): AnalysisResult {
+  validateCombination(model, combination);
+  const { numbering, elements, springs, system } = prepared;
   const combined = combineLoads(model, combination);
   const loads = assembleLoads(elements, combined.elements, combined.nodal, numbering);
 
-  const factorisation = factorSystem(K, {
-    describeEquation: (equation) => {
-      const slot = numbering.equationSlot[equation] as number;
-      const n = Math.floor(slot / DOFS_PER_NODE);
-      const node = model.nodes[n];
-      return { text: `node ${node?.id ?? n} dof ${DOFS[slot % DOFS_PER_NODE]}`, path: `nodes[${n}]` };
-    },
-  });
-  const { u, residual } = solveChecked(K, factorisation, loads.f);
+  const contactOptions: ContactOptions = {};
+  if (options.maxContactIterations !== undefined) contactOptions.maxIterations = options.maxContactIterations;
+  if (options.initialActiveSprings !== undefined) contactOptions.initialActiveSprings = options.initialActiveSprings;
+  if (options.contactFallback !== undefined) contactOptions.robustFallback = options.contactFallback;
+  if (options.contactTolerance !== undefined) contactOptions.tolerance = options.contactTolerance;
+  const contact = solveContact(system, loads.f, contactOptions);
+  const { u, residual, backwardError } = solveChecked(stateMatrix(system, contact.state), contact.factorisation, contact.rhs);
 
   // Displacements of every slot (0 where fixed or not an unknown).
-  const U = new Float64Array(numbering.nodeCount * DOFS_PER_NODE);
+  const U = new Float64Array(numbering.slotCount);
   numbering.equationSlot.forEach((slot, equation) => {
     U[slot] = u[equation] as number;
   });
 
   // Nodal out-of-balance K U − F per slot; at fixed slots it is the support reaction.
   const imbalance = new Float64Array(U.length);
-  for (let s = 0; s < U.length; s++) imbalance[s] = -(loads.F[s] as number);
+  for (let s = 0; s < loads.F.length; s++) imbalance[s] = -(loads.F[s] as number);
   const stations: Station[] = [];
   const xsOf = (L: number): number[] => Array.from({ length: stationCount }, (_, i) => (i === stationCount - 1 ? L : (L * i) / (stationCount - 1)));
+  const D = new Float64Array(14);
+  const d = new Float64Array(14);
+  const p = new Float64Array(14);
   elements.forEach((element, i) => {
     const local = loads.local[i] as { q: Vec3; m: Vec3; fe: Float64Array };
-    const D = Float64Array.from(element.slots, (slot) => U[slot] as number);
-    const d = new Float64Array(14);
+    const T = prepared.TFlat[i] as Float64Array;
+    const ke = prepared.keFlat[i] as Float64Array;
+    for (let a = 0; a < 14; a++) D[a] = U[element.slots[a] as number] as number;
     for (let a = 0; a < 14; a++) {
       let s = 0;
-      for (let b = 0; b < 14; b++) s += element.T.get(a, b) * (D[b] as number);
+      for (let b = 0; b < 14; b++) s += (T[14 * a + b] as number) * (D[b] as number);
       d[a] = s;
     }
     // p = ke d − fe: the local forces the nodes apply to the element (fe already sits in F).
-    const p = new Float64Array(14);
     for (let a = 0; a < 14; a++) {
       let s = 0;
-      for (let b = 0; b < 14; b++) s += element.ke.get(a, b) * (d[b] as number);
+      for (let b = 0; b < 14; b++) s += (ke[14 * a + b] as number) * (d[b] as number);
       p[a] = s - (local.fe[a] as number);
     }
     for (let a = 0; a < 14; a++) {
       let s = 0;
-      for (let b = 0; b < 14; b++) s += element.T.get(b, a) * ((p[b] as number) + (local.fe[b] as number));
+      for (let b = 0; b < 14; b++) s += (T[14 * b + a] as number) * ((p[b] as number) + (local.fe[b] as number));
       const slot = element.slots[a] as number;
       imbalance[slot] = (imbalance[slot] as number) + s;
     }
@@ -86,16 +158,17 @@ export function analyse(model: GirderModel, combination: Combination, options: A
 
   const springForces: SpringForce[] = [];
   let reactionSum: Vec3 = [0, 0, 0];
-  for (const spring of springs) {
+  springs.forEach((spring, i) => {
     const elongation = springElongation(spring, U);
-    const force = -spring.stiffness * elongation;
+    const state = contact.state[i] as number;
+    const force = state === ELASTIC ? -spring.stiffness * elongation : state === AT_CAPACITY ? -(system.capacity[i] as number) : 0;
     for (let a = 0; a < 6; a++) {
       const slot = spring.slots[a] as number;
       imbalance[slot] = (imbalance[slot] as number) - force * (spring.g[a] as number);
     }
-    springForces.push({ id: spring.id, force, elongation });
+    springForces.push({ id: spring.id, force, elongation, state: STATE_NAMES[state as 0 | 1 | 2] });
     reactionSum = add(reactionSum, [force * spring.direction[0], force * spring.direction[1], force * spring.direction[2]]);
-  }
+  });
 
   const supported = new Set(model.supports.map((s) => s.node));
   const reactions: SupportReaction[] = [];
@@ -119,18 +192,69 @@ export function analyse(model: GirderModel, combination: Combination, options: A
     return { node: node.id, ux: at(0), uy: at(1), uz: at(2), rx: at(3), ry: at(4), rz: at(5), w: at(6) };
   });
 
-  return {
+  const result: AnalysisResult = {
     combination: combination.name,
     converged: true,
-    iterations: 1,
+    iterations: contact.iterations,
     residual,
+    backwardError,
     displacements,
     reactions,
     springForces,
-    appliedSum: sumLoads(model, combination).force,
+    appliedSum: resultantOfLoads(model, combined).force,
     reactionSum,
     stations,
   };
+  if (model.springs.length > 0) result.contact = summariseContact(model, springForces, contact.iterations, contact.globalised);
+  return result;
+}
+
+/** Relative size below which a bilateral spring force counts as zero when flagging tension. */
+const TENSION_FLAG = 1e-9;
+
+function summariseContact(model: GirderModel, forces: readonly SpringForce[], iterations: number, globalised: boolean): ContactSummary {
+  const largest = forces.reduce((m, s) => Math.max(m, Math.abs(s.force)), 0);
+  const tensionInBilateral: { id: string; force: number }[] = [];
+  const anchorsAtCapacity: string[] = [];
+  const activeSprings: string[] = [];
+  const byGroup = new Map<string, number[]>();
+  model.springs.forEach((spring, i) => {
+    const force = forces[i] as SpringForce;
+    if (force.state !== 'open') activeSprings.push(spring.id);
+    if (force.state === 'at-capacity') anchorsAtCapacity.push(spring.id);
+    if ((spring.behaviour ?? 'bilateral') === 'bilateral' && force.force < -TENSION_FLAG * largest) tensionInBilateral.push({ id: spring.id, force: force.force });
+    if (spring.group !== undefined) {
+      const members = byGroup.get(spring.group) ?? [];
+      members.push(i);
+      byGroup.set(spring.group, members);
+    }
+  });
+  const groups: BearingGroupContact[] = [...byGroup].map(([group, members]) => {
+    let inContact = 0;
+    let contactLength = 0;
+    let maxPressure = 0;
+    const liftOffZones: { from: string; to: string }[] = [];
+    let zoneStart: string | undefined;
+    let zoneEnd = '';
+    for (const i of members) {
+      const spring = model.springs[i];
+      const force = (forces[i] as SpringForce).force;
+      if (spring === undefined) continue;
+      if (force > 0) {
+        inContact++;
+        contactLength += spring.tributaryLength ?? 0;
+        if (spring.tributaryLength !== undefined) maxPressure = Math.max(maxPressure, force / spring.tributaryLength);
+        if (zoneStart !== undefined) liftOffZones.push({ from: zoneStart, to: zoneEnd });
+        zoneStart = undefined;
+      } else {
+        zoneStart ??= spring.id;
+        zoneEnd = spring.id;
+      }
+    }
+    if (zoneStart !== undefined) liftOffZones.push({ from: zoneStart, to: zoneEnd });
+    return { group, springs: members.length, inContact, contactFraction: inContact / members.length, contactLength, maxPressure, liftOffZones };
+  });
+  return { activeSprings, iterations, globalised, groups, tensionInBilateral, anchorsAtCapacity };
 }
 
 export interface ReactionResultant {

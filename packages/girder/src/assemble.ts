@@ -3,9 +3,8 @@
  * by separate functions so that a contact solver can keep the element part and switch springs on
  * and off (addSpringStiffness with factor −1 removes one again).
  */
-import type { Matrix } from 'ml-matrix';
 import type { DirectionCosines } from './element.js';
-import { consistentLoads, elementAxes, globalStiffness, localStiffness, toLocal, transformation } from './element.js';
+import { consistentLoads, elementAxes, globalStiffnessFlat, localStiffnessFlat, toLocal, transformationFlat } from './element.js';
 import type { UniformElementLoad } from './loads.js';
 import type { GirderModel, SectionStiffness, Vec3 } from './model.js';
 import { DOFS_PER_NODE } from './model.js';
@@ -22,10 +21,11 @@ export interface PreparedElement {
   length: number;
   R: DirectionCosines;
   section: SectionStiffness;
-  ke: Matrix;
-  T: Matrix;
-  Ke: Matrix;
-  /** The 14 global slots of the element freedoms. */
+  /** Local stiffness, transformation and global stiffness, row-major 14×14. */
+  ke: Float64Array;
+  T: Float64Array;
+  Ke: Float64Array;
+  /** The 14 global slots of the element freedoms (warping: see numbering.elementWarpingSlot). */
   slots: Int32Array;
 }
 
@@ -41,14 +41,17 @@ export function prepareElements(model: GirderModel, numbering: EquationNumbering
     const nodeJ = numbering.nodeIndex.get(element.nodeJ) as number;
     const section = model.sections[element.section] as SectionStiffness;
     const { length, R } = elementAxes(pointOf(model, nodeI), pointOf(model, nodeJ), element.up, `elements[${i}]`);
-    const ke = localStiffness(section, length);
-    const T = transformation(R);
+    const ke = localStiffnessFlat(section, length);
+    const T = transformationFlat(R);
     const slots = new Int32Array(14);
     for (let k = 0; k < DOFS_PER_NODE; k++) {
       slots[k] = nodeI * DOFS_PER_NODE + k;
       slots[DOFS_PER_NODE + k] = nodeJ * DOFS_PER_NODE + k;
     }
-    return { id: element.id, nodeI, nodeJ, length, R, section, ke, T, Ke: globalStiffness(ke, T), slots };
+    // Warping freedoms: the node's, or the end's own where warping is released (numbering.ts).
+    slots[6] = numbering.elementWarpingSlot[2 * i] as number;
+    slots[13] = numbering.elementWarpingSlot[2 * i + 1] as number;
+    return { id: element.id, nodeI, nodeJ, length, R, section, ke, T, Ke: globalStiffnessFlat(ke, T), slots };
   });
 }
 
@@ -63,7 +66,7 @@ export function assembleStiffness(elements: readonly PreparedElement[], numberin
       for (let b = 0; b <= a; b++) {
         const q = eq[b] as number;
         if (q < 0) continue;
-        const v = element.Ke.get(a, b);
+        const v = element.Ke[14 * a + b] as number;
         if (v !== 0) addSymmetric(K, p, q, v);
       }
     }
@@ -75,10 +78,10 @@ export interface PreparedSpring {
   id: string;
   node: number;
   stiffness: number;
-  /** g = [d; r × d]: the point's displacement along d is gᵀ [u; θ] of the node. */
-  g: Float64Array;
-  /** Global slots of the node's translations and rotations. */
-  slots: Int32Array;
+  /** g = [d; r × d]: the point's displacement along d is gᵀ [u; θ] of the node (6 entries). */
+  g: readonly number[];
+  /** Global slots of the node's translations and rotations (6 entries). */
+  slots: readonly number[];
   /** Point of action (node + offset), global. */
   point: Vec3;
   direction: Vec3;
@@ -95,8 +98,8 @@ export function prepareSprings(model: GirderModel, numbering: EquationNumbering)
       id: spring.id,
       node,
       stiffness: spring.stiffness,
-      g: Float64Array.from([d[0], d[1], d[2], rxd[0], rxd[1], rxd[2]]),
-      slots: Int32Array.from({ length: 6 }, (_, k) => node * DOFS_PER_NODE + k),
+      g: [d[0], d[1], d[2], rxd[0], rxd[1], rxd[2]],
+      slots: [0, 1, 2, 3, 4, 5].map((k) => node * DOFS_PER_NODE + k),
       point: [base[0] + r[0], base[1] + r[1], base[2] + r[2]],
       direction: d,
     };
@@ -140,7 +143,9 @@ export function assembleLoads(
   nodal: Float64Array,
   numbering: EquationNumbering,
 ): AssembledLoads {
-  const F = Float64Array.from(nodal);
+  // Node slots first, then the private warping slots of released element ends (numbering.ts).
+  const F = new Float64Array(numbering.slotCount);
+  F.set(nodal);
   const local = elements.map((element, i) => {
     const load = elementLoads[i] as UniformElementLoad;
     const q = toLocal(element.R, load.q);
@@ -149,7 +154,7 @@ export function assembleLoads(
     // Fe = Tᵀ fe.
     for (let a = 0; a < 14; a++) {
       let s = 0;
-      for (let b = 0; b < 14; b++) s += element.T.get(b, a) * (fe[b] as number);
+      for (let b = 0; b < 14; b++) s += (element.T[14 * b + a] as number) * (fe[b] as number);
       const slot = element.slots[a] as number;
       F[slot] = (F[slot] as number) + s;
     }

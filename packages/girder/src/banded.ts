@@ -77,6 +77,7 @@ export function factorLdlt(A: BandedSymmetric, options: LdltOptions = {}): LdltF
         'MECHANISM',
         `mechanism: ${where.text} is unrestrained (pivot ${d.toPrecision(3)} against diagonal ${original.toPrecision(3)}); add a support, a spring or a connecting element`,
         where.path,
+        where.text,
       );
     }
     minPivotRatio = Math.min(minPivotRatio, ratio);

@@ -74,11 +74,18 @@ export function toGlobal(R: DirectionCosines, v: Vec3): Vec3 {
 
 /** Local stiffness ke (14x14) on the local freedoms listed at the top of this file. */
 export function localStiffness(section: SectionStiffness, L: number): Matrix {
+  const ke = localStiffnessFlat(section, L);
+  return new Matrix(Array.from({ length: ELEMENT_DOFS }, (_, a) => Array.from(ke.subarray(ELEMENT_DOFS * a, ELEMENT_DOFS * (a + 1)))));
+}
+
+/** localStiffness as a row-major Float64Array. */
+export function localStiffnessFlat(section: SectionStiffness, L: number): Float64Array {
   const { A, Iy, Iz, It, Iw, E, G } = section;
-  const ke = new Matrix(ELEMENT_DOFS, ELEMENT_DOFS);
+  const n = ELEMENT_DOFS;
+  const ke = new Float64Array(n * n);
   const put = (i: number, j: number, v: number): void => {
-    ke.set(i, j, v);
-    ke.set(j, i, v);
+    ke[n * i + j] = v;
+    ke[n * j + i] = v;
   };
   const L2 = L * L;
   const L3 = L2 * L;
@@ -119,7 +126,7 @@ export function localStiffness(section: SectionStiffness, L: number): Matrix {
   const torsionDofs = [3, 6, 10, 13];
   for (let a = 0; a < 4; a++) {
     for (let b = 0; b < 4; b++) {
-      ke.set(torsionDofs[a] as number, torsionDofs[b] as number, (kt[a] as number[])[b] as number);
+      ke[n * (torsionDofs[a] as number) + (torsionDofs[b] as number)] = (kt[a] as number[])[b] as number;
     }
   }
   return ke;
@@ -127,20 +134,58 @@ export function localStiffness(section: SectionStiffness, L: number): Matrix {
 
 /** T (14x14): d_local = T d_global. */
 export function transformation(R: DirectionCosines): Matrix {
-  const T = new Matrix(ELEMENT_DOFS, ELEMENT_DOFS);
+  const T = transformationFlat(R);
+  return new Matrix(Array.from({ length: ELEMENT_DOFS }, (_, a) => Array.from(T.subarray(ELEMENT_DOFS * a, ELEMENT_DOFS * (a + 1)))));
+}
+
+/** transformation as a row-major Float64Array. */
+export function transformationFlat(R: DirectionCosines): Float64Array {
+  const n = ELEMENT_DOFS;
+  const T = new Float64Array(n * n);
   for (const offset of [0, 3, 7, 10]) {
     for (let i = 0; i < 3; i++) {
-      for (let j = 0; j < 3; j++) T.set(offset + i, offset + j, (R[i] as Vec3)[j] as number);
+      for (let j = 0; j < 3; j++) T[n * (offset + i) + offset + j] = (R[i] as Vec3)[j] as number;
     }
   }
-  T.set(6, 6, 1);
-  T.set(13, 13, 1);
+  T[n * 6 + 6] = 1;
+  T[n * 13 + 13] = 1;
   return T;
 }
 
 /** Ke = Tᵀ ke T. */
 export function globalStiffness(ke: Matrix, T: Matrix): Matrix {
-  return T.transpose().mmul(ke).mmul(T);
+  const Ke = globalStiffnessFlat(Float64Array.from(ke.to1DArray()), Float64Array.from(T.to1DArray()));
+  return new Matrix(Array.from({ length: ELEMENT_DOFS }, (_, a) => Array.from(Ke.subarray(ELEMENT_DOFS * a, ELEMENT_DOFS * (a + 1)))));
+}
+
+/** Ke = Tᵀ ke T on row-major 14×14 arrays (plain loops: this runs for every element of every analysis). */
+export function globalStiffnessFlat(ke: Float64Array, T: Float64Array): Float64Array {
+  const n = ELEMENT_DOFS;
+  const kT = new Float64Array(n * n);
+  for (let a = 0; a < n; a++) {
+    for (let c = 0; c < n; c++) {
+      const v = ke[a * n + c] as number;
+      if (v === 0) continue;
+      for (let b = 0; b < n; b++) kT[a * n + b] = (kT[a * n + b] as number) + v * (T[c * n + b] as number);
+    }
+  }
+  const Ke = new Float64Array(n * n);
+  for (let c = 0; c < n; c++) {
+    for (let a = 0; a < n; a++) {
+      const v = T[c * n + a] as number;
+      if (v === 0) continue;
+      for (let b = 0; b < n; b++) Ke[a * n + b] = (Ke[a * n + b] as number) + v * (kT[c * n + b] as number);
+    }
+  }
+  // Exactly symmetric (the products round differently in the two triangles).
+  for (let a = 0; a < n; a++) {
+    for (let b = 0; b < a; b++) {
+      const v = 0.5 * ((Ke[a * n + b] as number) + (Ke[b * n + a] as number));
+      Ke[a * n + b] = v;
+      Ke[b * n + a] = v;
+    }
+  }
+  return Ke;
 }
 
 /**

@@ -83,8 +83,12 @@ export interface LoadResultant {
 export function sumLoads(model: GirderModel, combination: Combination): LoadResultant {
   validateModel(model);
   validateCombination(model, combination);
+  return resultantOfLoads(model, combineLoads(model, combination));
+}
+
+/** The resultant of already combined loads of a validated model (see sumLoads). */
+export function resultantOfLoads(model: GirderModel, loads: CombinedLoads): LoadResultant {
   const index = nodeIndexOf(model);
-  const loads = combineLoads(model, combination);
   let force: Vec3 = [0, 0, 0];
   let moment: Vec3 = [0, 0, 0];
   model.elements.forEach((element, i) => {

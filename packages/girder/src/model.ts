@@ -17,7 +17,8 @@ export type Vec3 = [number, number, number];
  * continuity between the segments: an approximation, exact for a straight line of elements. For a
  * ring of many segments the forces converge to the curved beam (ring.test.ts) and the bimoment
  * converges with the segment count; the latter is not yet checked against a curved-beam warping
- * solution. A warping release at a corner is not modelled yet.
+ * solution. A warping release (GirderNode.warpingRelease, GirderElement.warpingRelease) gives an
+ * element end its own warping freedom instead, so no bimoment passes through that joint.
  */
 export const DOFS = ['ux', 'uy', 'uz', 'rx', 'ry', 'rz', 'w'] as const;
 export type Dof = (typeof DOFS)[number];
@@ -33,6 +34,12 @@ export interface GirderNode {
   x: number;
   y: number;
   z: number;
+  /**
+   * true: warping is not continuous through this node (e.g. a frame corner without warping
+   * stiffeners): every element end here has its own warping freedom, free to warp (B = 0 there).
+   * The node's own w is then reported as 0 and a support fixing w here has no effect.
+   */
+  warpingRelease?: boolean;
 }
 
 /**
@@ -69,6 +76,8 @@ export interface GirderElement {
   /** Key into GirderModel.sections. */
   section: string;
   up?: Vec3;
+  /** Release warping continuity at end I and/or J only (see GirderNode.warpingRelease). */
+  warpingRelease?: { I?: boolean; J?: boolean };
 }
 
 /** Fixed (eliminated) degrees of freedom of one node. Several supports on one node are merged. */
@@ -76,6 +85,17 @@ export interface Support {
   node: string;
   fix: Dof[];
 }
+
+/**
+ * Force–elongation law of a spring (F = −k δ is positive in compression, see PointSpring):
+ * - 'bilateral': linear in tension and compression (a bonded bearing);
+ * - 'compression-only': F = k max(−δ, 0), a tensionless bearing that lifts off;
+ * - anchored: linear in compression and in tension up to the anchor's tension capacity (N, > 0),
+ *   beyond which the tension stays at the capacity (elastic–perfectly plastic).
+ * All three derive from convex energies ½kδ², ½k min(δ, 0)² and the plastic one, so the contact
+ * problem is the minimum of a convex, piecewise quadratic energy.
+ */
+export type SpringBehaviour = 'bilateral' | 'compression-only' | { kind: 'anchored'; tensionCapacity: number };
 
 /**
  * A translational spring acting at a point rigidly attached to a node.
@@ -97,6 +117,12 @@ export interface PointSpring {
   stiffness: number;
   /** Global vector from the node to the point where the spring acts, m. Default: the node itself. */
   offset?: Vec3;
+  /** Default 'bilateral'. */
+  behaviour?: SpringBehaviour;
+  /** Bearing line the spring belongs to (e.g. 'inner edge'); results summarise contact per group. */
+  group?: string;
+  /** Length of bearing line the spring stands for, m; contact pressure per length = F / tributaryLength. */
+  tributaryLength?: number;
 }
 
 /**

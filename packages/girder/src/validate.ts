@@ -94,18 +94,38 @@ export function validateModel(model: GirderModel): void {
     });
   });
 
-  const springIds = new Map<string, string>();
+  // Springs are the most numerous input (several bearing points per node): paths are composed only
+  // when a check fails.
+  const springIndex = new Map<string, number>();
   model.springs.forEach((spring, i) => {
-    const path = `springs[${i}]`;
-    const id = requireId(spring.id, `${path}.id`);
-    requireUnique(springIds, id, `${path}.id`);
-    requireReference(nodeIds, spring.node, `${path}.node`, 'node');
-    const d = requireVec3(spring.direction, `${path}.direction`);
-    if (Math.abs(norm(d) - 1) > UNIT_TOLERANCE) bad(`${path}.direction`, `must be a unit vector; its length is ${norm(d)}`);
+    const path = (field: string): string => `springs[${i}]${field}`;
+    if (typeof spring.id !== 'string' || spring.id.length === 0) bad(path('.id'), 'must be a non-empty string');
+    const previous = springIndex.get(spring.id);
+    if (previous !== undefined) bad(path('.id'), `'${spring.id}' is already used by springs[${previous}]`);
+    springIndex.set(spring.id, i);
+    if (typeof spring.node !== 'string' || !nodeIds.has(spring.node)) bad(path('.node'), `refers to node '${String(spring.node)}', which is not defined`);
+    const d = spring.direction;
+    if (!isFiniteVec3(d)) bad(path('.direction'), 'must be three finite numbers');
+    if (Math.abs(norm(d) - 1) > UNIT_TOLERANCE) bad(path('.direction'), `must be a unit vector; its length is ${norm(d)}`);
     if (typeof spring.stiffness !== 'number' || !Number.isFinite(spring.stiffness) || spring.stiffness <= 0) {
-      bad(`${path}.stiffness`, `must be positive (N/m); got ${String(spring.stiffness)}`);
+      bad(path('.stiffness'), `must be positive (N/m); got ${String(spring.stiffness)}`);
     }
-    if (spring.offset !== undefined) requireVec3(spring.offset, `${path}.offset`);
+    if (spring.offset !== undefined && !isFiniteVec3(spring.offset)) bad(path('.offset'), 'must be three finite numbers');
+    const behaviour: unknown = spring.behaviour;
+    if (behaviour !== undefined && behaviour !== 'bilateral' && behaviour !== 'compression-only') {
+      if (typeof behaviour !== 'object' || behaviour === null || (behaviour as { kind?: unknown }).kind !== 'anchored') {
+        bad(path('.behaviour'), `must be 'bilateral', 'compression-only' or { kind: 'anchored', tensionCapacity }; got ${JSON.stringify(behaviour)}`);
+      }
+      const capacity = (behaviour as { tensionCapacity?: unknown }).tensionCapacity;
+      if (typeof capacity !== 'number' || !Number.isFinite(capacity) || capacity <= 0) {
+        bad(path('.behaviour.tensionCapacity'), `must be a positive force (N); got ${String(capacity)}`);
+      }
+    }
+    if (spring.group !== undefined && (typeof spring.group !== 'string' || spring.group.length === 0)) bad(path('.group'), 'must be a non-empty string');
+    const tributary: unknown = spring.tributaryLength;
+    if (tributary !== undefined && (typeof tributary !== 'number' || !Number.isFinite(tributary) || tributary <= 0)) {
+      bad(path('.tributaryLength'), `must be a positive length (m); got ${String(tributary)}`);
+    }
   });
 
   const caseNames = new Map<string, string>();

@@ -69,6 +69,10 @@ export const binSpecInput = z.strictObject(
         diameter: quantity({ min: 1, max: 60, unit: 'm' }),
         cylinderHeight: quantity({ min: 0.5, max: 100, unit: 'm' }),
         fillHeight: quantity({ min: 0.1, max: 100, unit: 'm' }).optional(),
+        topSurface: choice(['level', 'pile']).default('level'),
+        fillingEccentricity: quantity({ min: 0, max: 30, unit: 'm' }).default(0),
+        outletEccentricity: quantity({ min: 0, max: 30, unit: 'm' }).default(0),
+        eccentricityAngle: quantity({ min: -360, max: 360, unit: 'degrees' }).default(0),
         wallThickness: quantity({ min: 2, max: 60, unit: 'mm' }),
         hopper: z.strictObject(
           {
@@ -116,10 +120,66 @@ export const binSpecInput = z.strictObject(
         {
           permanentFactor: quantity({ min: 1, max: 2, unit: '' }).default(1.35),
           solidFactor: quantity({ min: 1, max: 2, unit: '' }).default(1.5),
+          variableFactor: quantity({ min: 1, max: 2, unit: '' }).default(1.5),
+          combinationMethod: choice(['6.10', '6.10a/b']).default('6.10'),
         },
         { error: 'must be a table of partial factors' },
       )
-      .default({ permanentFactor: 1.35, solidFactor: 1.5 }),
+      .default({ permanentFactor: 1.35, solidFactor: 1.5, variableFactor: 1.5, combinationMethod: '6.10' }),
+    roof: z
+      .strictObject(
+        {
+          deadLoad: quantity({ min: 0, max: 20, unit: 'kN/m2' }),
+          imposedLoad: quantity({ min: 0, max: 20, unit: 'kN/m2' }).default(0),
+          pitch: quantity({ min: 0, max: 60, unit: 'degrees' }).default(0),
+        },
+        { error: 'must be a table with deadLoad, imposedLoad, pitch' },
+      )
+      .optional(),
+    snow: z
+      .strictObject(
+        {
+          groundLoad: quantity({ min: 0, max: 20, unit: 'kN/m2' }),
+          exposureCoefficient: quantity({ min: 0.5, max: 2, unit: '' }).default(1),
+          thermalCoefficient: quantity({ min: 0.5, max: 1, unit: '' }).default(1),
+        },
+        { error: 'must be a table with groundLoad' },
+      )
+      .optional(),
+    wind: z
+      .strictObject(
+        {
+          basicVelocity: quantity({ min: 10, max: 60, unit: 'm/s' }),
+          terrainCategory: choice(['0', 'I', 'II', 'III', 'IV']),
+          supportLevelHeight: quantity({ min: 0, max: 100, unit: 'm' }),
+          directions: z.array(quantity({ min: -360, max: 360, unit: 'degrees' })).min(1).max(36).optional(),
+        },
+        { error: 'must be a table with basicVelocity, terrainCategory, supportLevelHeight' },
+      )
+      .optional(),
+    seismic: z
+      .strictObject(
+        {
+          horizontalCoefficient: quantity({ min: 0, max: 2, unit: '' }),
+          effectiveSolidMassFraction: quantity({ min: 0, max: 1, unit: '' }).default(0.8),
+          directions: z.array(quantity({ min: -360, max: 360, unit: 'degrees' })).min(1).max(36).optional(),
+        },
+        { error: 'must be a table with horizontalCoefficient' },
+      )
+      .optional(),
+    equipment: z
+      .array(
+        z.strictObject({
+          name: text(60).min(1, { error: 'must not be empty' }),
+          angle: quantity({ min: -360, max: 360, unit: 'degrees' }),
+          radius: quantity({ min: 0, max: 30, unit: 'm' }),
+          force: quantity({ min: 0, max: 10000, unit: 'kN' }),
+          kind: choice(['permanent', 'variable']).default('permanent'),
+        }),
+        { error: 'must be a list of equipment loads' },
+      )
+      .max(100)
+      .default([]),
   },
   { error: 'must be a table with project, bin, solid and support' },
 );

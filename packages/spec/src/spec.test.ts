@@ -33,7 +33,9 @@ describe('normaliseSpec', () => {
     expect(spec.support.girderDiameter).toBeCloseTo(6.006, 12);
     expect(spec.support.grade).toBe('S355');
     expect(spec.support.segmentsPerSpan).toBe(24);
-    expect(spec.actions).toEqual({ permanentFactor: 1.35, solidFactor: 1.5 });
+    expect(spec.actions).toEqual({ permanentFactor: 1.35, solidFactor: 1.5, variableFactor: 1.5, combinationMethod: '6.10' });
+    expect(spec.equipment).toEqual([]);
+    expect(spec.wind).toBeUndefined();
   });
 
   it('takes wheat from EN 1991-4 Table E.1 (upper unit weight 9.0 kN/m3, K_m 0.54, mu_m D2 0.38)', () => {
@@ -100,5 +102,28 @@ describe('parseSpecText', () => {
     expect(() => parseSpecText('project: [unclosed', 'yaml', 'a.yaml')).toThrowError(/a.yaml is not valid YAML/);
     expect(() => parseSpecText('{"project": ', 'json', 'a.json')).toThrowError(/a.json is not valid JSON/);
     expect(() => parseSpecText('a: 1\na: 2\n', 'yaml', 'dup.yaml')).toThrowError(/dup.yaml is not valid YAML/);
+  });
+});
+
+describe('other actions', () => {
+  it('converts roof, snow, wind, seismic and equipment inputs to SI', () => {
+    const spec = normaliseSpec({
+      ...minimal,
+      roof: { deadLoad: 0.5, imposedLoad: 0.6, pitch: 15 },
+      snow: { groundLoad: 1.2 },
+      wind: { basicVelocity: 26, terrainCategory: 'II', supportLevelHeight: 6, directions: [0, 90] },
+      seismic: { horizontalCoefficient: 0.1 },
+      equipment: [{ name: 'filter', angle: 45, radius: 2, force: 20 }],
+    });
+    expect(spec.roof).toEqual({ deadLoad: 500, imposedLoad: 600, pitch: (15 * Math.PI) / 180 });
+    expect(spec.snow).toEqual({ groundLoad: 1200, exposureCoefficient: 1, thermalCoefficient: 1 });
+    expect(spec.wind?.directions).toEqual([0, Math.PI / 2]);
+    expect(spec.seismic).toEqual({ horizontalCoefficient: 0.1, effectiveSolidMassFraction: 0.8 });
+    expect(spec.equipment).toEqual([{ name: 'filter', angle: Math.PI / 4, radius: 2, force: 20000, kind: 'permanent' }]);
+  });
+
+  it('names the field, range and unit of a bad action input', () => {
+    expect(errorOf({ ...minimal, wind: { basicVelocity: 90, terrainCategory: 'II', supportLevelHeight: 6 } }).message).toBe('wind.basicVelocity must be a number between 10 and 60 m/s; got 90');
+    expect(errorOf({ ...minimal, equipment: [{ name: 'x', angle: 0, radius: 2, force: -3 }] }).message).toBe('equipment[0].force must be a number between 0 and 10000 kN; got -3');
   });
 });

@@ -2,7 +2,7 @@ import { SpecError, type SpecIssue } from './errors.js';
 import { zodIssues } from './issues.js';
 import { binSpecInput, type BinSpecParsed, type supportScenarios } from './schema.js';
 import { resolveStoredSolid, type StoredSolid } from './solids.js';
-import { degToRad, knPerM3ToNPerM3, mmToM } from './units.js';
+import { degToRad, KN, KPA, knPerM3ToNPerM3, mmToM } from './units.js';
 
 export const STEEL_DENSITY = 7850; // kg/m3, EN 1991-1-1 Table A.4 (steel)
 
@@ -19,6 +19,11 @@ export interface BinSpec {
     /** Height of the level solid surface above the transition, m. */
     fillHeight: number;
     wallThickness: number;
+    topSurface: 'level' | 'pile';
+    fillingEccentricity: number;
+    outletEccentricity: number;
+    /** Direction of the eccentricities from +X, rad. */
+    eccentricityAngle: number;
     hopper: { apexHalfAngle: number; outletDiameter: number; thickness: number };
     steelDensity: number;
   };
@@ -40,7 +45,16 @@ export interface BinSpec {
     flangeFlexibility: boolean;
     credibleScenarios: Array<(typeof supportScenarios)[number]>;
   };
-  actions: { permanentFactor: number; solidFactor: number };
+  actions: { permanentFactor: number; solidFactor: number; variableFactor: number; combinationMethod: '6.10' | '6.10a/b' };
+  /** Roof loads on plan, Pa; pitch rad. */
+  roof?: { deadLoad: number; imposedLoad: number; pitch: number };
+  /** Characteristic ground snow load, Pa (EN 1991-1-3). */
+  snow?: { groundLoad: number; exposureCoefficient: number; thermalCoefficient: number };
+  /** Wind (EN 1991-1-4): basic velocity m/s, height of the support level above ground m, directions rad. */
+  wind?: { basicVelocity: number; terrainCategory: '0' | 'I' | 'II' | 'III' | 'IV'; supportLevelHeight: number; directions?: number[] };
+  seismic?: { horizontalCoefficient: number; effectiveSolidMassFraction: number; directions?: number[] };
+  /** Equipment loads: angle rad, radius m, force N. */
+  equipment: Array<{ name: string; angle: number; radius: number; force: number; kind: 'permanent' | 'variable' }>;
 }
 
 function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
@@ -94,6 +108,10 @@ export function normaliseSpec(document: unknown): BinSpec {
       diameter: input.bin.diameter,
       cylinderHeight: input.bin.cylinderHeight,
       fillHeight: input.bin.fillHeight ?? input.bin.cylinderHeight,
+      topSurface: input.bin.topSurface,
+      fillingEccentricity: input.bin.fillingEccentricity,
+      outletEccentricity: input.bin.outletEccentricity,
+      eccentricityAngle: degToRad(input.bin.eccentricityAngle),
       wallThickness,
       hopper: {
         apexHalfAngle: degToRad(input.bin.hopper.apexHalfAngle),
@@ -118,5 +136,14 @@ export function normaliseSpec(document: unknown): BinSpec {
       credibleScenarios: [...new Set(input.support.credibleScenarios)],
     },
     actions: input.actions,
+    ...(input.roof ? { roof: { deadLoad: input.roof.deadLoad * KPA, imposedLoad: input.roof.imposedLoad * KPA, pitch: degToRad(input.roof.pitch) } } : {}),
+    ...(input.snow ? { snow: { groundLoad: input.snow.groundLoad * KPA, exposureCoefficient: input.snow.exposureCoefficient, thermalCoefficient: input.snow.thermalCoefficient } } : {}),
+    ...(input.wind
+      ? { wind: { basicVelocity: input.wind.basicVelocity, terrainCategory: input.wind.terrainCategory, supportLevelHeight: input.wind.supportLevelHeight, ...(input.wind.directions ? { directions: input.wind.directions.map(degToRad) } : {}) } }
+      : {}),
+    ...(input.seismic
+      ? { seismic: { horizontalCoefficient: input.seismic.horizontalCoefficient, effectiveSolidMassFraction: input.seismic.effectiveSolidMassFraction, ...(input.seismic.directions ? { directions: input.seismic.directions.map(degToRad) } : {}) } }
+      : {}),
+    equipment: input.equipment.map((item) => ({ name: item.name, angle: degToRad(item.angle), radius: item.radius, force: item.force * KN, kind: item.kind })),
   };
 }

@@ -3,6 +3,7 @@
 
 export const MM = 1e-3;
 export const KN = 1e3;
+export const KPA = 1e3;
 export const DEG = Math.PI / 180;
 
 export function mmToM(valueMm: number): number {
