@@ -12,6 +12,7 @@ export function projectTestConfig(options: { include?: string[]; testTimeout?: n
       include: options.include ?? ['src/**/*.test.ts'],
       environment: 'node',
       testTimeout: options.testTimeout ?? 60_000,
+      hookTimeout: options.testTimeout ?? 60_000,
       pool: 'forks',
       reporters: ['default'],
     },

@@ -130,6 +130,8 @@ export function forceDiagramSpec(result: DesignResult, combination: string): Top
   const values: DiagramPoint[] = [];
   const scenarioTitles: string[] = [];
   for (const analysis of analyses) {
+    const diagram = analysis.diagram;
+    if (!diagram) continue;
     const scenario = result.scenarios.find((s) => s.id === analysis.scenario);
     // The short id keeps the legend on one line; section 4 of the report lists id and title together.
     const title = analysis.scenario;
@@ -138,8 +140,8 @@ export function forceDiagramSpec(result: DesignResult, combination: string): Top
     }
     const model = scenario?.credible === true ? 'design envelope' : 'comparison only';
     for (const quantity of diagramQuantities) {
-      const series = analysis.diagram[quantity.key];
-      analysis.diagram.angle.forEach((angle, i) => {
+      const series = diagram[quantity.key];
+      diagram.angle.forEach((angle, i) => {
         const value = series[i];
         if (value !== undefined) {
           values.push({ angle: toDegrees(angle), value: quantity.convert(value), quantity: quantity.label, scenario: title, model });

@@ -426,6 +426,20 @@ function supportSection(result: DesignResult): PdfContent[] {
       ['*', 44, 44, 44, 46, 46, 48, 46],
     ),
     caption('Largest absolute internal forces over all ultimate-limit-state combinations of each scenario.'),
+    subheading('4.2 What each assumption says about the chosen section'),
+    table(
+      [headerCell('Scenario'), headerCell('Utilisation if used alone', 'right'), headerCell('Bearing tension'), headerCell('Lesson')],
+      result.scenarios.map((s) => [
+        `${s.title}${s.credible ? '' : ' (comparison)'}`,
+        utilisationCell(s.utilisation ?? null),
+        s.needsTension
+          ? { text: `needs ${formatKilo(toKilonewtons(s.maxBearingTension ?? 0))} kN of tension a plain bearing cannot give`, color: colours.infeasible, bold: true }
+          : 'none',
+        s.lesson,
+      ]),
+      [110, 60, 90, '*'],
+    ),
+    caption('Utilisation of the chosen sections had each scenario alone been used to size them (ultimate limit states of resistance). A scenario that needs bearing tension is flagged: its answer rests on a force a real bearing cannot give.'),
   ];
 }
 
@@ -469,7 +483,7 @@ async function analysisSection(result: DesignResult): Promise<PdfContent[]> {
       [50, '*', 44, 40, 42, 52, 52, 50],
     ),
   ];
-  const combinations = result.loads.combinations.filter((c) => result.analyses.some((a) => a.combination === c.name));
+  const combinations = result.loads.combinations.filter((c) => result.analyses.some((a) => a.combination === c.name && a.diagram !== undefined));
   let figure = 1;
   for (const combination of combinations) {
     const svg = await renderChartSvg(forceDiagramSpec(result, combination.name));

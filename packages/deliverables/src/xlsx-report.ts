@@ -403,6 +403,7 @@ function diagramsSheet(workbook: Workbook, result: DesignResult): void {
   const rows: CellValue[][] = [];
   for (const a of result.analyses) {
     const d = a.diagram;
+    if (!d) continue;
     d.angle.forEach((angle, i) => {
       rows.push([
         a.combination,

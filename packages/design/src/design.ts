@@ -1,4 +1,4 @@
-import { analyse, GirderError, type AnalysisResult, type GirderModel, type SectionStiffness, type Station } from '@binsupport/girder';
+import { analyseAll, GirderError, type AnalysisResult, type GirderModel, type SectionStiffness, type Station } from '@binsupport/girder';
 import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
 import { solveSelection } from '@binsupport/optimiser';
 import type { BinSpec } from '@binsupport/spec';
@@ -116,19 +116,19 @@ export function analyseScenario(context: DesignContext, section: SteelSection, s
     selfWeightCase: PERMANENT_CASE,
     columnSupport: scenario.columnSupport(section, context.column, spec, grade),
   });
-  const analyses = loads.combinations.filter((combination) => only === undefined || only.has(combination.name)).map((combination) => {
-    let analysis: AnalysisResult;
-    try {
-      analysis = analyse(model, { name: combination.name, factors: combination.factors }, { stationsPerElement: context.stationsPerElement });
-    } catch (error) {
-      if (error instanceof GirderError) {
-        throw new DesignError('ANALYSIS_FAILED', `analysis of ${combination.name} / ${scenario.id} with ${section.designation} refused: ${error.message}`);
-      }
-      throw error;
+  const combinations = loads.combinations.filter((combination) => only === undefined || only.has(combination.name));
+  let analyses: AnalysisResult[];
+  try {
+    // One call for all combinations: each is solved on its own (contact forbids superposition), but
+    // the set-up and the factorisations of repeated contact states are shared.
+    analyses = analyseAll(model, combinations.map((combination) => ({ name: combination.name, factors: combination.factors })), { stationsPerElement: context.stationsPerElement });
+  } catch (error) {
+    if (error instanceof GirderError) {
+      throw new DesignError('ANALYSIS_FAILED', `analysis under ${scenario.id} with ${section.designation} refused: ${error.message}`);
     }
-    guardEquilibrium(analysis, scenario.id);
-    return analysis;
-  });
+    throw error;
+  }
+  for (const analysis of analyses) guardEquilibrium(analysis, scenario.id);
   return { scenario, model, analyses };
 }
 
@@ -366,6 +366,18 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     utilisation: finiteOrNull(envelope.check.utilisation),
     ...(envelope.check.outOfScope ? { note: envelope.check.outOfScope } : {}),
   }));
+  // Force diagrams are kept for the governing combination of each scenario and the one with the
+  // largest torsion (the others are summarised by their peaks; every one can be re-run with `analyse`).
+  const diagramKeys = new Set<string>();
+  for (const { scenario, analyses: results } of allScenarios) {
+    const scenarioEnvelope = envelopeChecks(final.section, grade, ulsStations(context, [{ scenario, model: firstModel, analyses: results }]));
+    const worst = governingEnvelope(scenarioEnvelope);
+    if (worst) diagramKeys.add(`${scenario.id}|${worst.combination}`);
+    const twisting = [...results].sort((a, b) => peakOf(b.stations, 'T') - peakOf(a.stations, 'T'))[0];
+    if (twisting) diagramKeys.add(`${scenario.id}|${twisting.combination}`);
+  }
+  diagramKeys.add(`${governing.scenario}|${governing.combination}`);
+  for (const { scenario } of allScenarios) diagramKeys.add(`${scenario.id}|${governing.combination}`);
   const analyses: AnalysisSummary[] = allScenarios.flatMap(({ scenario, model, analyses: results }) =>
     results.map((analysis) => ({
       combination: analysis.combination,
@@ -376,7 +388,7 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
       reactionSum: analysis.reactionSum,
       appliedSum: analysis.appliedSum,
       peaks: { N: peakOf(analysis.stations, 'N'), Vz: peakOf(analysis.stations, 'Vz'), T: peakOf(analysis.stations, 'T'), My: peakOf(analysis.stations, 'My'), Mz: peakOf(analysis.stations, 'Mz'), B: peakOf(analysis.stations, 'B') },
-      diagram: diagramOf(model, layout, analysis.stations),
+      ...(diagramKeys.has(`${scenario.id}|${analysis.combination}`) ? { diagram: diagramOf(model, layout, analysis.stations) } : {}),
       ...bearingSummary(analysis),
     })),
   );

@@ -118,6 +118,11 @@ export interface AnalysisSummary {
   appliedSum: [number, number, number];
   /** Largest absolute internal forces over the girder. */
   peaks: { N: number; Vz: number; T: number; My: number; Mz: number; B: number };
+  /**
+   * Internal forces around the girder, kept for the analyses a reader needs to see: in each scenario
+   * the combination that governs the chosen section and the one with the largest torsion.
+   */
+  diagram?: ForceDiagram;
   /** Bearing state, where the scenario has bearing points. */
   bearings?: {
     /** Fraction of the bearing points in contact (pressing). */
@@ -129,7 +134,6 @@ export interface AnalysisSummary {
     /** Forces of the bearing points of the most loaded column, N, in order across the flange from inside to outside. */
     mostLoadedColumn: { group: string; forces: number[] };
   };
-  diagram: ForceDiagram;
 }
 
 export interface Position {

@@ -53,8 +53,8 @@ describe('rigid footing on a compression-only foundation (kern rule)', () => {
   const b = 1;
   const P = 1e6;
   const ks = 1e8; // foundation modulus, N/m3
-  // EI = 2.1e10 N m2: beta L = (ks b/(4 EI))^(1/4) L = 0.37, rigid for this purpose (a stiffer
-  // beam makes the pivot test see the few springs left under it as a mechanism).
+  // EI = 2.1e10 N m2: beta L = (ks b/(4 EI))^(1/4) L = 0.37, rigid for this purpose (a much stiffer
+  // beam only adds rounding: element stiffness times the rigid rotation of the lifted part).
   const rigid: SectionStiffness = { A: 1, Iy: 0.1, Iz: 0.1, It: 0.1, Iw: 0, E: 210e9, G: 81e9, density: 0 };
   const xs = [...Array.from({ length: n / 2 }, (_, i) => (i + 0.5) * h), L / 2, ...Array.from({ length: n / 2 }, (_, i) => L / 2 + (i + 0.5) * h)];
   const footing = (e: number): GirderModel =>
@@ -103,6 +103,15 @@ describe('rigid footing on a compression-only foundation (kern rule)', () => {
       // stiffnesses of ~1e15 N/m, and rounding of K u (backward error ~1e-17 here) leaves ~0.05 N.
       expect(Math.abs(result.reactionSum[2] - P) / P).toBeLessThan(1e-7);
     }
+  });
+
+  it('regression: a very stiff footing (EI = 2.1e12 N m2) on the few springs left in contact is not taken for a mechanism', () => {
+    // Its smallest pivot ratio (spring k over 12 EI/h^3, about 2.5e-11) is below the default 1e-10
+    // threshold; states with lifted-off bearings are judged at 1e-12 (contact.ts, factorState).
+    const model = footing(0.4 * L);
+    model.sections.S = { ...rigid, Iy: 10, Iz: 10, It: 10 };
+    const group = analyse(model, C).contact?.groups[0];
+    expect(Math.abs((group?.contactLength ?? NaN) - 3 * (L / 2 - 0.4 * L))).toBeLessThanOrEqual(h * (1 + 1e-9));
   });
 });
 
@@ -282,7 +291,7 @@ describe('independent cross-check: contact solution = QP minimum (quadprog)', ()
 describe('anchored bearings (elastic–perfectly plastic in tension)', () => {
   it('an anchor at capacity holds exactly its capacity, equilibrium holds, and it is reported', () => {
     // Statics of a rigid lever (common practice): a very stiff cantilever stub on two bearings.
-    const rigid: SectionStiffness = { A: 1, Iy: 10, Iz: 10, It: 10, Iw: 0, E: 210e9, G: 81e9, density: 0 };
+    const rigid: SectionStiffness = { A: 1, Iy: 0.1, Iz: 0.1, It: 0.1, Iw: 0, E: 210e9, G: 81e9, density: 0 };
     const capacity = 20e3;
     const model = beamOnSprings(
       [0, 1, 2],

@@ -128,18 +128,21 @@ const scenarios: ScenarioSummary[] = [
     id: 'contact',
     title: 'Compression-only contact across the flange',
     description: 'Tensionless bearing points across the bottom flange width over each column cap.',
+    lesson: 'Invented fixture: the realistic assumption.',
     credible: true,
   },
   {
     id: 'bonded',
     title: 'Fully bonded flange',
     description: 'The flange is tied to the column cap over its full width; bearings take tension.',
+    lesson: 'Invented fixture: a simpler assumption shown for comparison.',
     credible: false,
   },
   {
     id: 'web-line',
     title: 'Line support under the web',
     description: 'A single bearing line under the web at each column; no flange contact.',
+    lesson: 'Invented fixture: a simpler assumption shown for comparison.',
     credible: false,
   },
 ];
@@ -339,7 +342,7 @@ const checks: CheckDefinition[] = [
     check: 'normal-stress-warping',
     title: 'Cross-section normal stress with warping (N + My + B)',
     clause: 'EN 1993-1-1 6.2.1(5), 6.2.7(6)',
-    evaluate: (_combination, result) => normalStressCheck(result.diagram),
+    evaluate: (_combination, result) => normalStressCheck(requireDiagram(result)),
   },
   {
     member: 'RG',
@@ -369,11 +372,17 @@ const memberSections: Record<'RG' | 'COL', { section: string; massPerLength: num
   COL: { section: column.section, massPerLength: column.massPerLength, length: columns * columnHeight, description: 'Columns (8 off, pinned bases)' },
 };
 
+/** The fixture gives every analysis a diagram. */
+function requireDiagram(result: AnalysisSummary): NonNullable<AnalysisSummary['diagram']> {
+  if (!result.diagram) throw new Error(`fixture analysis ${result.combination}/${result.scenario} has no diagram`);
+  return result.diagram;
+}
+
 function positionOf(memberId: 'RG' | 'COL', result: AnalysisSummary, station: number): UtilisationRow['position'] {
   if (memberId === 'COL') {
     return { element: 'COL-1', x: 0, angle: 0, description: 'Column C1 at 0.0°, base' };
   }
-  const angle = result.diagram.angle[station] ?? 0;
+  const angle = requireDiagram(result).angle[station] ?? 0;
   const segment = Math.min(segments - 1, Math.floor((angle / (2 * Math.PI)) * segments));
   const segmentLength = 2 * radius * Math.sin(Math.PI / segments);
   const x = ((angle - (segment * 2 * Math.PI) / segments) / ((2 * Math.PI) / segments)) * segmentLength;
