@@ -39,3 +39,30 @@ describe('binsupport command line', () => {
     expect(missing.err.join('')).toMatch(/no-such-spec.yaml: the spec file cannot be read/);
   });
 });
+
+describe('listing commands', () => {
+  it('materials lists the built-in solids with their source', async () => {
+    const { streams, out } = capture();
+    expect(await runCli(['materials'], streams)).toBe(EXIT_OK);
+    expect(out.join('')).toMatch(/^wheat\s+7.5\/9\s.*Table E.1, row 'wheat'/m);
+  });
+
+  it('sections lists a family; IPE 300 weighs 42.2 kg/m (EN 10365 table value)', async () => {
+    const { streams, out } = capture();
+    expect(await runCli(['sections', 'IPE'], streams)).toBe(EXIT_OK);
+    expect(out.join('')).toMatch(/^IPE 300\s+300\s+150\s+7.1\s+10.7\s+42.2\s/m);
+    const bad = capture();
+    expect(await runCli(['sections', 'W'], bad.streams)).toBe(EXIT_BAD_INPUT);
+    expect(bad.err.join('')).toMatch(/section family 'W' is not known/);
+  });
+
+  it('loads --json closes: G + Q_s,f carry the solid and the plates (statics)', async () => {
+    const { streams, out } = capture();
+    expect(await runCli(['loads', '../../demo-data/kestrel-grain-bin.yaml', '--json'], streams)).toBe(EXIT_OK);
+    const report = JSON.parse(out.join('')) as { schemaVersion: string; cases: Array<{ name: string; verticalResultant: number }>; totals: { solidWeight: number; structureWeight: number }; profiles: unknown[] };
+    expect(report.schemaVersion).toBe('1.0.0');
+    const gravity = report.cases.filter((c) => c.name === 'G' || c.name === 'Q_s,f').reduce((sum, c) => sum + c.verticalResultant, 0);
+    expect(gravity / (report.totals.solidWeight + report.totals.structureWeight)).toBeCloseTo(1, 9);
+    expect(report.profiles.length).toBeGreaterThan(0);
+  });
+});

@@ -4,6 +4,7 @@ import { parseArgs } from 'node:util';
 import { analyseModelFile, designFromSpec, DesignError, stableJson, type ModelFileResult } from '@binsupport/design';
 import { atomicWrite, writeDesignPdf, writeDesignXlsx } from '@binsupport/deliverables';
 import { readGirderModelFile, readSpecFile, SpecError } from '@binsupport/spec';
+import { runLoads, runMaterials, runSections } from './catalogue-commands.js';
 import { version } from './version.js';
 
 export interface CliStreams {
@@ -21,6 +22,9 @@ const mainHelp = `binsupport ${version}: design of the support girders of steel 
 Usage:
   binsupport design <spec.yaml|spec.json> --out <folder>   design a bin's support girder
   binsupport analyse <model.json|model.yaml> [--json]      re-run one girder model (as written by design)
+  binsupport loads <spec> [--json]                         the load derivation of a spec, without the girder
+  binsupport materials [--json]                            the built-in stored solids
+  binsupport sections <family> [--json]                    a section family with its properties
   binsupport --help | --version
 
 Run 'binsupport design --help' for the inputs and outputs of a design.
@@ -158,5 +162,8 @@ export async function runCli(argv: string[], streams: CliStreams): Promise<numbe
   }
   if (command === 'design') return runDesign(rest, streams);
   if (command === 'analyse') return runAnalyse(rest, streams);
+  if (command === 'loads') return runLoads(rest, streams);
+  if (command === 'materials') return runMaterials(rest, streams);
+  if (command === 'sections') return runSections(rest, streams);
   return fail(streams, EXIT_BAD_INPUT, `unknown command '${command}'\n\n${mainHelp}`);
 }

@@ -5,3 +5,4 @@ export { stableJson } from './json.js';
 export { buildRingModel, type RingLayout, type RingModelInput } from './ring.js';
 export { TOOL_NAME, TOOL_VERSION } from './version.js';
 export { analyseModelFile, girderModelDocument, GIRDER_MODEL_SCHEMA_VERSION, type GirderModelDocument, type ModelFileResult } from './model-file.js';
+export { loadsReport, sectionCatalogue, listedSectionFamilies, LOADS_SCHEMA_VERSION, type LoadsReport } from './catalogue.js';
