@@ -33,7 +33,7 @@ describe('binsupport command line', () => {
   it('names the file when the spec has the wrong extension or does not exist', async () => {
     const wrong = capture();
     expect(await runCli(['design', 'spec.txt', '--out', '/tmp/never-written'], wrong.streams)).toBe(EXIT_BAD_INPUT);
-    expect(wrong.err.join('')).toMatch(/spec.txt: an input file must be .yaml, .yml or .json/);
+    expect(wrong.err.join('')).toMatch(/spec.txt: an input file must be .yaml, .yml, .json/);
     const missing = capture();
     expect(await runCli(['design', 'no-such-spec.yaml', '--out', '/tmp/never-written'], missing.streams)).toBe(EXIT_BAD_INPUT);
     expect(missing.err.join('')).toMatch(/no-such-spec.yaml: the spec file cannot be read/);

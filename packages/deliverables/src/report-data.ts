@@ -150,3 +150,56 @@ export function utilisationBand(utilisation: number | null): UtilisationBand {
   }
   return 'adequate';
 }
+
+/** The bearing state of one analysis, picked to show how a scenario bears on the column caps. */
+export interface BearingPanel {
+  scenario: ScenarioSummary;
+  /** The combination shown: the one that governs the scenario (see bearingPanels). */
+  combination: string;
+  bearings: NonNullable<AnalysisSummary['bearings']>;
+  /** The analysis of the scenario with the least contact, when it differs from the one shown. */
+  leastContact?: { combination: string; contactFraction: number };
+}
+
+/**
+ * The combination that governs a scenario: the one of its highest utilisation among the checks of
+ * the design envelope; for a scenario outside the envelope (no checks recorded for it), the
+ * combination that governs the design, which every scenario is analysed and kept under.
+ */
+export function governingCombinationOf(result: DesignResult, scenarioId: string): string | undefined {
+  let best: { combination: string; utilisation: number } | undefined;
+  for (const row of result.utilisations) {
+    if (row.scenario !== scenarioId || row.utilisation === null) continue;
+    if (best === undefined || row.utilisation > best.utilisation) best = { combination: row.combination, utilisation: row.utilisation };
+  }
+  if (best !== undefined) return best.combination;
+  let governing: { combination: string; utilisation: number } | undefined;
+  for (const member of result.members) {
+    const utilisation = member.utilisation ?? Number.POSITIVE_INFINITY;
+    if (governing === undefined || utilisation > governing.utilisation) governing = { combination: member.governing.combination, utilisation };
+  }
+  return governing?.combination;
+}
+
+/** For each scenario with bearing points: the bearing state under its governing combination. */
+export function bearingPanels(result: DesignResult): BearingPanel[] {
+  const panels: BearingPanel[] = [];
+  for (const scenario of result.scenarios) {
+    const own = result.analyses.filter((a) => a.scenario === scenario.id && a.bearings !== undefined);
+    const combination = governingCombinationOf(result, scenario.id);
+    const shown = own.find((a) => a.combination === combination);
+    if (shown?.bearings === undefined) continue;
+    const least = own.reduce<AnalysisSummary | undefined>((low, a) => (low === undefined || (a.bearings?.contactFraction ?? 1) < (low.bearings?.contactFraction ?? 1) ? a : low), undefined);
+    const panel: BearingPanel = { scenario, combination: shown.combination, bearings: shown.bearings };
+    if (least?.bearings !== undefined && least.bearings.contactFraction < shown.bearings.contactFraction) {
+      panel.leastContact = { combination: least.combination, contactFraction: least.bearings.contactFraction };
+    }
+    panels.push(panel);
+  }
+  return panels;
+}
+
+/** Column C(j+1) stands at 2 pi j / columns from +X (C1 at +X, counter-clockwise seen from above). */
+export function columnAngles(columns: number): number[] {
+  return Array.from({ length: columns }, (_, j) => (2 * Math.PI * j) / columns);
+}

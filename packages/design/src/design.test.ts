@@ -72,3 +72,47 @@ describe('design loop', () => {
     expect(second).toBe(first);
   });
 });
+
+describe('ring girder bearing on a slab', () => {
+  // Invented test bin: the girder sits 50 mm inside the wall line, so the shell load is eccentric.
+  const onSlab: BinSpecInput = {
+    ...base,
+    support: { type: 'ring-on-slab', girderDiameter: 5.95, segments: 96, bearingModulus: 200, anchorCapacity: 20 },
+  };
+
+  it('takes compression-only contact as the credible scenario and reports the simpler ones beside it', async () => {
+    const { result } = await designFromSpec(normaliseSpec(onSlab));
+    expect(result.status).toBe('verified');
+    expect(result.scenarios.map((s) => [s.id, s.credible])).toEqual([
+      ['slab-contact', true],
+      ['slab-bonded', false],
+      ['slab-web-line', false],
+      ['slab-inner-edge-line', false],
+      ['slab-anchored', false],
+    ]);
+    expect(result.members[0]?.section).toBe(bruteForceChoice(onSlab));
+    const contact = result.analyses.filter((a) => a.scenario === 'slab-contact');
+    // Compression-only: no bearing point pulls, in any combination.
+    for (const analysis of contact) expect(analysis.bearings?.maxTension ?? 0).toBeLessThanOrEqual(1e-6 * (analysis.bearings?.maxCompression ?? 1));
+  });
+
+  it('shows the trade observation: a line at the inner flange edge overstates the bending of the ring (common practice)', async () => {
+    // With the line of action outside the inner-edge line, a support there turns the whole load into
+    // a distributed torque that a closed ring carries in bending (M = m R, REFERENCES.md §2), which
+    // real contact across the flange does not.
+    const { result } = await designFromSpec(normaliseSpec(onSlab));
+    const peak = (scenario: string) => Math.max(...result.analyses.filter((a) => a.scenario === scenario).map((a) => a.peaks.My));
+    expect(peak('slab-inner-edge-line')).toBeGreaterThan(1.5 * peak('slab-contact'));
+    const edge = result.scenarios.find((s) => s.id === 'slab-inner-edge-line');
+    const contact = result.scenarios.find((s) => s.id === 'slab-contact');
+    expect(edge?.utilisation ?? 0).toBeGreaterThan(contact?.utilisation ?? Infinity);
+  });
+});
+
+describe('support scenarios on column caps (common practice)', () => {
+  it('a point under the web gives more girder torsion than contact on the cap', async () => {
+    const { result } = await designFromSpec(normaliseSpec(base));
+    const peakT = (scenario: string) => Math.max(...result.analyses.filter((a) => a.scenario === scenario).map((a) => a.peaks.T));
+    expect(peakT('columns-under-web')).toBeGreaterThan(peakT('column-cap-contact'));
+  });
+});

@@ -114,7 +114,8 @@ export function analyseScenario(context: DesignContext, section: SteelSection, s
     sectionDepth: section.dimensions.depth,
     cases: loads.cases,
     selfWeightCase: PERMANENT_CASE,
-    columnSupport: scenario.columnSupport(section, context.column, spec, grade),
+    ...(scenario.columnSupport ? { columnSupport: scenario.columnSupport(section, context.column, spec, grade) } : {}),
+    ...(scenario.slabBearing ? { slabBearing: scenario.slabBearing(section, spec, grade) } : {}),
   });
   const combinations = loads.combinations.filter((combination) => only === undefined || only.has(combination.name));
   let analyses: AnalysisResult[];
@@ -160,7 +161,7 @@ export function designContext(spec: BinSpec, stationsPerElement = 5): DesignCont
   return {
     spec,
     loads: loadsFor(spec),
-    layout: { radius: spec.support.girderDiameter / 2, columns: spec.support.columns, segmentsPerSpan: spec.support.segmentsPerSpan },
+    layout: { kind: spec.support.type === 'ring-on-slab' ? 'slab' : 'columns', radius: spec.support.girderDiameter / 2, columns: spec.support.columns, segmentsPerSpan: spec.support.segmentsPerSpan },
     grade,
     // Axial stiffness of the column, E A / H (the cap's bearing springs share it).
     column: { section: columnSection, axialStiffness: (grade.youngsModulus * columnSection.properties.area) / spec.support.columnHeight },
@@ -180,6 +181,9 @@ function positionOf(model: GirderModel, layout: RingLayout, station: Station): P
   const y = nodeI.y + t * (nodeJ.y - nodeI.y);
   let angle = Math.atan2(y, x);
   if (angle < 0) angle += 2 * Math.PI;
+  if (layout.kind === 'slab') {
+    return { element: station.element, x: station.x, angle, description: `at ${((angle * 180) / Math.PI).toFixed(1)} deg around the ring (from +X)` };
+  }
   const span = (2 * Math.PI) / layout.columns;
   const spanIndex = Math.floor(angle / span + 1e-9) % layout.columns;
   const fromColumn = angle - spanIndex * span;
@@ -229,7 +233,9 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   if (candidates.length === 0) throw new DesignError('BAD_INPUT', 'no candidate sections in the chosen families', 'support.sectionFamilies');
 
   const credible = SCENARIOS.filter((scenario) => spec.support.credibleScenarios.includes(scenario.id));
-  const comparison = SCENARIOS.filter((scenario) => !spec.support.credibleScenarios.includes(scenario.id));
+  const comparison = SCENARIOS.filter(
+    (scenario) => scenario.supportType === spec.support.type && !spec.support.credibleScenarios.includes(scenario.id) && !(scenario.id === 'slab-anchored' && spec.support.anchorCapacity === 0),
+  );
   progress(`loads: solid ${(loads.totals.solidWeight / 1e3).toFixed(1)} kN, plates ${(loads.totals.structureWeight / 1e3).toFixed(1)} kN, ${loads.combinations.length} combinations`);
   const girderLength = 2 * Math.PI * layout.radius;
 
@@ -337,7 +343,7 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   for (const scenario of allScenarios) guardLoadTotals(final.section, scenario, loads, girderLength);
   const member: MemberResult = {
     id: MEMBER_ID,
-    description: `ring girder on ${layout.columns} columns, centroid radius ${layout.radius.toFixed(3)} m`,
+    description: layout.kind === 'slab' ? `ring girder bearing on a slab, centroid radius ${layout.radius.toFixed(3)} m` : `ring girder on ${layout.columns} columns, centroid radius ${layout.radius.toFixed(3)} m`,
     section: final.section.designation,
     grade: grade.name,
     length: girderLength,
@@ -396,7 +402,9 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     const isCredible = credible.includes(scenario);
     const envelope = envelopeChecks(final.section, grade, ulsStations(context, [{ scenario, model: firstModel, analyses: results }]));
     const maxTension = Math.max(0, ...results.map((analysis) => bearingSummary(analysis).bearings?.maxTension ?? 0));
-    return { ...scenarioSummary(scenario, isCredible), utilisation: finiteOrNull(maxUtilisation(envelope)), needsTension: maxTension > 0, maxBearingTension: maxTension };
+    // A tension below a thousandth of the largest bearing compression is round-off in practice.
+    const maxCompression = Math.max(0, ...results.map((analysis) => bearingSummary(analysis).bearings?.maxCompression ?? 0));
+    return { ...scenarioSummary(scenario, isCredible), utilisation: finiteOrNull(maxUtilisation(envelope)), needsTension: maxTension > 1e-3 * maxCompression, maxBearingTension: maxTension };
   });
   const geometry = circularBinGeometry(spec.bin);
   const girderWeight = final.section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
@@ -412,7 +420,7 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     cautions: CAUTIONS,
     input: spec,
     bin: { diameter: spec.bin.diameter, cylinderHeight: spec.bin.cylinderHeight, hopperHeight: geometry.hopperHeight, apexHalfAngle: spec.bin.hopper.apexHalfAngle, solid: spec.solid.name },
-    girder: { kind: 'ring', radius: layout.radius, columns: layout.columns, segments: layout.columns * layout.segmentsPerSpan, spanAngle: (2 * Math.PI) / layout.columns },
+    girder: { kind: 'ring', support: layout.kind === 'slab' ? 'slab' : 'columns', radius: layout.radius, columns: layout.columns, segments: layout.columns * layout.segmentsPerSpan, spanAngle: (2 * Math.PI) / layout.columns },
     loads: {
       cases: loads.cases.map((loadCase) => ({ name: loadCase.name, description: loadCase.description, kind: loadCase.kind, verticalLineLoad: loadCase.verticalLineLoad, radialLineLoad: loadCase.radialLineLoad, verticalResultant: loadCase.verticalResultant })),
       combinations: loads.combinations,
@@ -437,11 +445,11 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
 
 /** Bearing forces of an analysis with bearing points (springs with a group). */
 function bearingSummary(analysis: AnalysisResult): Pick<AnalysisSummary, 'bearings'> {
-  const bearingForces = analysis.springForces.filter((spring) => spring.id.includes('-cap-'));
+  const bearingForces = analysis.springForces.filter((spring) => spring.id.includes('-cap-') || spring.id.includes('-bearing-'));
   if (bearingForces.length === 0) return {};
   const byColumn = new Map<string, number[]>();
   for (const spring of bearingForces) {
-    const group = `${spring.id.split('-cap-')[0]} cap`;
+    const group = spring.id.includes('-cap-') ? `${spring.id.split('-cap-')[0]} cap` : `bearing at ${spring.id.split('-bearing-')[0]}`;
     byColumn.set(group, [...(byColumn.get(group) ?? []), spring.force]);
   }
   let mostLoaded = { group: '', forces: [] as number[] };

@@ -131,7 +131,7 @@ export interface AnalysisSummary {
     maxCompression: number;
     /** Largest tension in one bearing point, N (bonded bearings only; 0 if none). */
     maxTension: number;
-    /** Forces of the bearing points of the most loaded column, N, in order across the flange from inside to outside. */
+    /** Forces of the bearing points of the most loaded column (or bearing node on a slab), N, in order across the flange from inside to outside. */
     mostLoadedColumn: { group: string; forces: number[] };
   };
 }
@@ -221,6 +221,8 @@ export interface DesignResult {
   };
   girder: {
     kind: 'ring';
+    /** 'columns' or 'slab' (then `columns` is 1 and `spanAngle` the full circle). */
+    support: 'columns' | 'slab';
     radius: number;
     columns: number;
     segments: number;

@@ -3,6 +3,8 @@ import { lineLoadAt, type SupportLineCase } from '@binsupport/loads';
 
 /** A ring girder on equally spaced columns: the plan data the model builder needs (SI). */
 export interface RingLayout {
+  /** 'columns': on equally spaced columns; 'slab': bearing all round on a slab or ring beam (columns is then 1). */
+  kind?: 'columns' | 'slab';
   /** Radius of the girder's centroid line, m. */
   radius: number;
   columns: number;
@@ -60,6 +62,47 @@ export type ColumnSupport =
       flangeFlexibility: boolean;
     };
 
+/**
+ * How the girder bears on a slab or ring beam all round. At every node, bearing points stand for the
+ * node's tributary length of bearing: `points` across the flange width (contact: compression-only;
+ * bonded: bilateral; anchored: compression-only in bearing and holding down up to a tension
+ * capacity), each the bearing modulus times its tributary area, in series (optionally) with the
+ * flange outstand's bending; or a single bilateral line under the web or at the inner flange edge.
+ */
+export type SlabBearing = {
+  kind: 'slab';
+  layout: 'across-flange' | 'web-line' | 'inner-edge-line';
+  behaviour: 'compression-only' | 'bilateral' | 'anchored';
+  points: number;
+  /** Bearing modulus, N/m3 (pressure per unit settlement). */
+  bearingModulus: number;
+  /** Holding-down capacity per metre of girder, N/m (anchored only). */
+  anchorCapacityPerLength: number;
+  flangeWidth: number;
+  flangeThickness: number;
+  webThickness: number;
+  youngsModulus: number;
+  flangeFlexibility: boolean;
+};
+
+/** Bearing points of one node on a slab (see SlabBearing): offsets across the flange, stiffnesses. */
+export function slabSprings(bearing: SlabBearing, tributaryLength: number): Array<{ across: number; stiffness: number; tensionCapacity?: number }> {
+  const { flangeWidth: b, flangeThickness: tf, webThickness: tw, bearingModulus, youngsModulus } = bearing;
+  if (bearing.layout === 'web-line') return [{ across: 0, stiffness: bearingModulus * b * tributaryLength }];
+  if (bearing.layout === 'inner-edge-line') return [{ across: -b / 2, stiffness: bearingModulus * b * tributaryLength }];
+  const n = bearing.points;
+  return Array.from({ length: n }, (_, i) => {
+    const across = -b / 2 + (b * i) / (n - 1);
+    // Tributary width of the point across the flange: half a spacing at the tips, a spacing inside.
+    const width = (i === 0 || i === n - 1 ? 0.5 : 1) * (b / (n - 1));
+    const bearingStiffness = bearingModulus * width * tributaryLength;
+    const lever = Math.max(Math.abs(across) - tw / 2, 0);
+    const flange = lever > 0 && bearing.flangeFlexibility ? (3 * youngsModulus * (tributaryLength * tf ** 3) / 12) / lever ** 3 : Infinity;
+    const stiffness = Number.isFinite(flange) ? 1 / (1 / bearingStiffness + 1 / flange) : bearingStiffness;
+    return { across, stiffness, ...(bearing.behaviour === 'anchored' ? { tensionCapacity: bearing.anchorCapacityPerLength * tributaryLength * (width / b) } : {}) };
+  });
+}
+
 /** Springs of one column cap: their offsets across the flange and stiffnesses (see ColumnSupport). */
 export function capSprings(support: Extract<ColumnSupport, { kind: 'cap-plate' }>, sectionDepth: number): Array<{ across: number; down: number; stiffness: number }> {
   const { points, flangeWidth, flangeThickness, webThickness, capLength, columnAxialStiffness, youngsModulus } = support;
@@ -83,6 +126,8 @@ export interface RingModelInput {
   /** Name of the case that carries the girder's self weight. */
   selfWeightCase: string;
   columnSupport?: ColumnSupport;
+  /** For a girder on a slab (layout.kind 'slab'): how it bears all round. */
+  slabBearing?: SlabBearing;
 }
 
 /**
@@ -108,7 +153,31 @@ export function buildRingModel(input: RingModelInput): GirderModel {
 
   const supports: Support[] = [];
   const springs: PointSpring[] = [];
-  for (let j = 0; j < layout.columns; j++) {
+  if (layout.kind === 'slab') {
+    const bearing = input.slabBearing;
+    if (!bearing) throw new Error('a girder on a slab needs its bearing (slabBearing)');
+    const arc = (2 * Math.PI * R) / N;
+    nodes.forEach((node, k) => {
+      const angle = nodeAngle(layout, k);
+      const outward: Vec3 = [Math.cos(angle), Math.sin(angle), 0];
+      slabSprings(bearing, arc).forEach((point, i) => {
+        springs.push({
+          id: `${node.id}-bearing-${i + 1}`,
+          node: node.id,
+          direction: [0, 0, 1],
+          stiffness: point.stiffness,
+          offset: [point.across * outward[0], point.across * outward[1], -sectionDepth / 2],
+          behaviour: point.tensionCapacity !== undefined ? { kind: 'anchored', tensionCapacity: point.tensionCapacity } : bearing.behaviour === 'anchored' ? 'compression-only' : bearing.behaviour,
+          group: `bearing ${node.id}`,
+          tributaryLength: arc,
+        });
+      });
+      // Grout friction or shear keys: a tangential spring at every node removes the ring's rigid-body
+      // motions in plan (a modelling choice; it carries the horizontal actions into the slab).
+      springs.push({ id: `${node.id}-shear`, node: node.id, direction: [-Math.sin(angle), Math.cos(angle), 0], stiffness: bearing.bearingModulus * bearing.flangeWidth * arc });
+    });
+  }
+  for (let j = 0; layout.kind !== 'slab' && j < layout.columns; j++) {
     const k = j * layout.segmentsPerSpan;
     const angle = nodeAngle(layout, k);
     const column = input.columnSupport ?? { kind: 'point-under-web' };

@@ -1,6 +1,6 @@
 import type { BinSpec } from '@binsupport/spec';
 import type { SteelGrade, SteelSection } from '@binsupport/steel';
-import type { ColumnSupport } from './ring.js';
+import type { ColumnSupport, SlabBearing } from './ring.js';
 import type { ScenarioSummary } from './result.js';
 
 export type ScenarioId = BinSpec['support']['credibleScenarios'][number];
@@ -12,7 +12,26 @@ export interface ScenarioDefinition {
   description: string;
   /** One sentence: what this assumption tends to do to the answer (shown beside its results). */
   lesson: string;
-  columnSupport(girder: SteelSection, column: { axialStiffness: number }, spec: BinSpec, grade: SteelGrade): ColumnSupport;
+  /** The support type the scenario belongs to. */
+  supportType: BinSpec['support']['type'];
+  columnSupport?(girder: SteelSection, column: { axialStiffness: number }, spec: BinSpec, grade: SteelGrade): ColumnSupport;
+  slabBearing?(girder: SteelSection, spec: BinSpec, grade: SteelGrade): SlabBearing;
+}
+
+function slab(layout: SlabBearing['layout'], behaviour: SlabBearing['behaviour']) {
+  return (girder: SteelSection, spec: BinSpec, grade: SteelGrade): SlabBearing => ({
+    kind: 'slab',
+    layout,
+    behaviour,
+    points: spec.support.bearingPoints,
+    bearingModulus: spec.support.bearingModulus,
+    anchorCapacityPerLength: spec.support.anchorCapacity,
+    flangeWidth: girder.dimensions.flangeWidth,
+    flangeThickness: girder.dimensions.flangeThickness,
+    webThickness: girder.dimensions.webThickness,
+    youngsModulus: grade.youngsModulus,
+    flangeFlexibility: spec.support.flangeFlexibility,
+  });
 }
 
 function capPlate(behaviour: 'compression-only' | 'bilateral') {
@@ -37,6 +56,7 @@ export const SCENARIOS: ScenarioDefinition[] = [
     description:
       'The bottom flange rests on each column cap plate: compression-only bearing points across the flange width, each the column axial stiffness shared, in series with the flange outstand bending. The flange lifts off where it would pull, so the reaction moves toward a plate edge as the girder rolls.',
     lesson: 'The realistic assumption: the cap can only push, so the girder rolls about the loaded edge and the column takes the eccentric reaction.',
+    supportType: 'ring-on-columns',
     columnSupport: capPlate('compression-only'),
   },
   {
@@ -44,6 +64,7 @@ export const SCENARIOS: ScenarioDefinition[] = [
     title: 'Bonded to the column caps',
     description: 'The same bearing points as the contact scenario, but able to pull as well as push (a flange fully fixed to the cap).',
     lesson: 'A bonded cap stops the roll with tension a plain bearing cannot give, so it understates the girder torsion: unsafe unless the flange is really held down.',
+    supportType: 'ring-on-columns',
     columnSupport: capPlate('bilateral'),
   },
   {
@@ -51,7 +72,49 @@ export const SCENARIOS: ScenarioDefinition[] = [
     title: 'Point support under the web',
     description: 'A vertical support at the centre line of each column, free to twist: the textbook ring on simple supports.',
     lesson: 'A point under the web gives the cap no lever against the roll, so all the twist goes into the girder: it overstates torsion and wastes steel.',
+    supportType: 'ring-on-columns',
     columnSupport: () => ({ kind: 'point-under-web' }),
+  },
+  {
+    id: 'slab-contact',
+    title: 'Contact on the slab',
+    description:
+      'The bottom flange rests on the slab all round: compression-only bearing points across the flange width at every node, each the bearing modulus times its tributary area, in series with the flange outstand bending. The flange lifts off wherever it would pull.',
+    lesson: 'The realistic assumption: the flange lifts off where it would pull, so the girder rolls about a flange edge and the centre of rotation sits off the web.',
+    supportType: 'ring-on-slab',
+    slabBearing: slab('across-flange', 'compression-only'),
+  },
+  {
+    id: 'slab-bonded',
+    title: 'Bonded to the slab',
+    description: 'The same bearing points as the contact scenario, able to pull as well as push.',
+    lesson: 'Tension that cannot exist stops the twist, so the girder looks nearly unloaded in torsion: unsafe unless the flange is really held down.',
+    supportType: 'ring-on-slab',
+    slabBearing: slab('across-flange', 'bilateral'),
+  },
+  {
+    id: 'slab-web-line',
+    title: 'Line support under the web',
+    description: 'A single bilateral line of bearing under the web: the girder may twist about its own bottom centre line.',
+    lesson: 'The load acts at its full eccentricity about the web line, so torsion is overstated and steel wasted.',
+    supportType: 'ring-on-slab',
+    slabBearing: slab('web-line', 'bilateral'),
+  },
+  {
+    id: 'slab-inner-edge-line',
+    title: 'Line support at the inner flange edge',
+    description: 'A single bilateral line of bearing at the inner edge of the bottom flange, the usual hand assumption for a girder rolling inward.',
+    lesson: 'Looks reasonable, but it ignores the flange bending that moves the centre of rotation outward and can pull down where a real bearing cannot.',
+    supportType: 'ring-on-slab',
+    slabBearing: slab('inner-edge-line', 'bilateral'),
+  },
+  {
+    id: 'slab-anchored',
+    title: 'Anchored to the slab',
+    description: 'The contact bearing points, held down by anchors that take tension up to their capacity and then yield.',
+    lesson: 'Anchors give the bonded answer only up to their capacity; beyond it the girder rolls as on plain contact.',
+    supportType: 'ring-on-slab',
+    slabBearing: slab('across-flange', 'anchored'),
   },
 ];
 

@@ -5,3 +5,5 @@ export { readSpecFile, readDocumentFile, readGirderModelFile, parseSpecText, spe
 export { storedSolidTable, resolveStoredSolid, type StoredSolid, type StoredSolidRow, type WallSurfaceCategory, type SolidOverrides } from './solids.js';
 export { mmToM, degToRad, knPerM3ToNPerM3 } from './units.js';
 export { girderModelFile, parseGirderModelFile, type GirderModelFile, type GirderModelFileSection } from './girder-model.js';
+export { writeSpecTemplate, parseSpecWorkbook, readSpecWorkbook, normaliseSpecWorkbook, SPEC_SHEET, README_SHEET, TEMPLATE_EQUIPMENT_ROWS, type SpecSheetDocument } from './workbook.js';
+export { specSheetFields, type SpecSheetField, type SheetFieldKind } from './sheet-fields.js';

@@ -4,21 +4,23 @@ import { parse as parseYaml, YAMLParseError } from 'yaml';
 import { SpecError } from './errors.js';
 import { normaliseSpec, type BinSpec } from './spec.js';
 import { parseGirderModelFile, type GirderModelFile } from './girder-model.js';
+import { normaliseSpecWorkbook, parseSpecWorkbook } from './workbook.js';
 
 /** Largest spec file read, bytes: a spec sheet is a few kB; anything larger is not a spec. */
 export const MAX_SPEC_BYTES = 1_000_000;
 
-export type SpecFormat = 'yaml' | 'json';
+export type SpecFormat = 'yaml' | 'json' | 'xlsx';
 
 export function specFormatOf(path: string): SpecFormat {
   const extension = extname(path).toLowerCase();
   if (extension === '.yaml' || extension === '.yml') return 'yaml';
   if (extension === '.json') return 'json';
-  throw new SpecError('UNSUPPORTED_FORMAT', [{ path, message: `${path}: an input file must be .yaml, .yml or .json; got '${extension || 'no extension'}'` }]);
+  if (extension === '.xlsx') return 'xlsx';
+  throw new SpecError('UNSUPPORTED_FORMAT', [{ path, message: `${path}: an input file must be .yaml, .yml, .json or .xlsx; got '${extension || 'no extension'}'` }]);
 }
 
 /** Parse spec text of a known format into a plain document (no validation yet). */
-export function parseSpecText(textContent: string, format: SpecFormat, source = 'spec'): unknown {
+export function parseSpecText(textContent: string, format: Exclude<SpecFormat, 'xlsx'>, source = 'spec'): unknown {
   if (format === 'json') {
     try {
       return JSON.parse(textContent) as unknown;
@@ -35,9 +37,8 @@ export function parseSpecText(textContent: string, format: SpecFormat, source = 
   }
 }
 
-/** Read and parse a YAML or JSON input file of at most MAX_SPEC_BYTES (no validation yet). */
-export async function readDocumentFile(path: string): Promise<unknown> {
-  const format = specFormatOf(path);
+/** The bytes of an input file of at most MAX_SPEC_BYTES. */
+async function readInputBytes(path: string): Promise<Buffer> {
   let size: number;
   try {
     size = (await stat(path)).size;
@@ -47,12 +48,20 @@ export async function readDocumentFile(path: string): Promise<unknown> {
   if (size > MAX_SPEC_BYTES) {
     throw new SpecError('UNREADABLE_FILE', [{ path, message: `${path}: a spec file must be at most ${MAX_SPEC_BYTES} bytes; got ${size}` }]);
   }
-  const content = await readFile(path, 'utf8');
-  return parseSpecText(content, format, path);
+  return readFile(path);
 }
 
-/** Read, parse, validate and convert a spec file. */
+/** Read and parse a YAML, JSON or XLSX (spec sheet) input file of at most MAX_SPEC_BYTES (no validation yet). */
+export async function readDocumentFile(path: string): Promise<unknown> {
+  const format = specFormatOf(path);
+  const bytes = await readInputBytes(path);
+  if (format === 'xlsx') return parseSpecWorkbook(bytes, path);
+  return parseSpecText(bytes.toString('utf8'), format, path);
+}
+
+/** Read, parse, validate and convert a spec file; a spec sheet's errors name its sheet and row. */
 export async function readSpecFile(path: string): Promise<BinSpec> {
+  if (specFormatOf(path) === 'xlsx') return normaliseSpecWorkbook(await readInputBytes(path), path);
   return normaliseSpec(await readDocumentFile(path));
 }
 

@@ -47,7 +47,7 @@ export const steelGrades = ['S235', 'S275', 'S355', 'S460'] as const;
 export const sectionFamilies = ['IPE', 'HEB'] as const;
 export const wallSurfaceCategories = ['D1', 'D2', 'D3'] as const;
 /** Support scenarios of a ring on columns (docs/input-reference.md, "Support scenarios"). */
-export const supportScenarios = ['column-cap-contact', 'column-cap-bonded', 'columns-under-web'] as const;
+export const supportScenarios = ['column-cap-contact', 'column-cap-bonded', 'columns-under-web', 'slab-contact', 'slab-bonded', 'slab-web-line', 'slab-inner-edge-line', 'slab-anchored'] as const;
 
 export const binSpecInput = z.strictObject(
   {
@@ -97,8 +97,11 @@ export const binSpecInput = z.strictObject(
     ),
     support: z.strictObject(
       {
-        type: choice(['ring-on-columns']).default('ring-on-columns'),
-        columns: wholeNumber(3, 36, 'columns'),
+        type: choice(['ring-on-columns', 'ring-on-slab']).default('ring-on-columns'),
+        columns: wholeNumber(3, 36, 'columns').optional(),
+        segments: wholeNumber(24, 2880, 'segments').default(192),
+        bearingModulus: quantity({ min: 1, max: 100000, unit: 'MN/m3' }).default(200),
+        anchorCapacity: quantity({ min: 0, max: 10000, unit: 'kN/m' }).default(0),
         girderDiameter: quantity({ min: 1, max: 62, unit: 'm' }).optional(),
         segmentsPerSpan: wholeNumber(2, 120, 'segments').default(24),
         grade: choice(steelGrades).default('S355'),
@@ -111,7 +114,7 @@ export const binSpecInput = z.strictObject(
         credibleScenarios: z
           .array(choice(supportScenarios), { error: 'must be a list of support scenarios' })
           .min(1, { error: 'must name at least one credible support scenario' })
-          .default(['column-cap-contact']),
+          .optional(),
       },
       { error: 'must be a table describing the support' },
     ),

@@ -127,3 +127,20 @@ describe('other actions', () => {
     expect(errorOf({ ...minimal, equipment: [{ name: 'x', angle: 0, radius: 2, force: -3 }] }).message).toBe('equipment[0].force must be a number between 0 and 10000 kN; got -3');
   });
 });
+
+describe('support types', () => {
+  it('a ring on a slab needs no columns and defaults to the slab contact scenario', () => {
+    const spec = normaliseSpec({ ...minimal, support: { type: 'ring-on-slab', bearingModulus: 150 } });
+    expect(spec.support.columns).toBe(1);
+    expect(spec.support.segmentsPerSpan).toBe(192);
+    expect(spec.support.bearingModulus).toBe(150e6);
+    expect(spec.support.credibleScenarios).toEqual(['slab-contact']);
+    expect(normaliseSpec(minimal).support.credibleScenarios).toEqual(['column-cap-contact']);
+  });
+
+  it('names what does not fit the support type', () => {
+    expect(errorOf({ ...minimal, support: { type: 'ring-on-columns' } }).path).toBe('support.columns');
+    expect(errorOf({ ...minimal, support: { columns: 8, credibleScenarios: ['slab-contact'] } }).message).toBe("support.credibleScenarios[0] 'slab-contact' does not apply to support.type ring-on-columns");
+    expect(errorOf({ ...minimal, support: { type: 'ring-on-slab', credibleScenarios: ['slab-anchored'] } }).path).toBe('support.anchorCapacity');
+  });
+});

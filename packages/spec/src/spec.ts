@@ -29,8 +29,13 @@ export interface BinSpec {
   };
   solid: StoredSolid;
   support: {
-    type: 'ring-on-columns';
+    type: 'ring-on-columns' | 'ring-on-slab';
+    /** Number of columns (ring on columns); 1 for a ring on a slab. */
     columns: number;
+    /** Bearing modulus of the slab bearing, N/m3 (ring on a slab). */
+    bearingModulus: number;
+    /** Holding-down capacity of the anchors per metre of girder, N/m (0: no anchors). */
+    anchorCapacity: number;
     /** Diameter of the girder's centroid line, m (default: the centre line of the cylinder wall). */
     girderDiameter: number;
     segmentsPerSpan: number;
@@ -74,6 +79,19 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
   }
   if (totalHeight >= 100) {
     issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m; EN 1991-4 covers h_b below 100 m` });
+  }
+  const support = parsed.support;
+  if (support.type === 'ring-on-columns' && support.columns === undefined) {
+    issues.push({ path: 'support.columns', message: 'support.columns is required for a ring on columns (a whole number of columns between 3 and 36)' });
+  }
+  const ownPrefix = support.type === 'ring-on-slab' ? 'slab-' : 'column';
+  for (const [index, scenario] of (support.credibleScenarios ?? []).entries()) {
+    if (!scenario.startsWith(ownPrefix)) {
+      issues.push({ path: `support.credibleScenarios[${index}]`, message: `support.credibleScenarios[${index}] '${scenario}' does not apply to support.type ${support.type}` });
+    }
+    if (scenario === 'slab-anchored' && support.anchorCapacity === 0) {
+      issues.push({ path: 'support.anchorCapacity', message: "support.anchorCapacity must be greater than 0 kN/m for the scenario 'slab-anchored'" });
+    }
   }
   const wallCentreDiameter = bin.diameter + bin.wallThickness / 1000;
   const girderDiameter = parsed.support.girderDiameter ?? wallCentreDiameter;
@@ -123,9 +141,11 @@ export function normaliseSpec(document: unknown): BinSpec {
     solid,
     support: {
       type: input.support.type,
-      columns: input.support.columns,
+      columns: input.support.type === 'ring-on-slab' ? 1 : (input.support.columns ?? 0),
+      bearingModulus: input.support.bearingModulus * 1e6,
+      anchorCapacity: input.support.anchorCapacity * KN,
       girderDiameter: input.support.girderDiameter ?? input.bin.diameter + wallThickness,
-      segmentsPerSpan: input.support.segmentsPerSpan,
+      segmentsPerSpan: input.support.type === 'ring-on-slab' ? input.support.segments : input.support.segmentsPerSpan,
       grade: input.support.grade,
       sectionFamilies: [...new Set(input.support.sectionFamilies)],
       columnSection: input.support.columnSection,
@@ -133,7 +153,7 @@ export function normaliseSpec(document: unknown): BinSpec {
       capPlateLength: mmToM(input.support.capPlateLength),
       bearingPoints: input.support.bearingPoints,
       flangeFlexibility: input.support.flangeFlexibility,
-      credibleScenarios: [...new Set(input.support.credibleScenarios)],
+      credibleScenarios: [...new Set(input.support.credibleScenarios ?? (input.support.type === 'ring-on-slab' ? (['slab-contact'] as const) : (['column-cap-contact'] as const)))],
     },
     actions: input.actions,
     ...(input.roof ? { roof: { deadLoad: input.roof.deadLoad * KPA, imposedLoad: input.roof.imposedLoad * KPA, pitch: degToRad(input.roof.pitch) } } : {}),

@@ -200,6 +200,47 @@ function ringDiagram(combination: CombinationSummary, scenarioId: string): Force
   return diagram;
 }
 
+/** Bearing points across the bottom flange on each column cap (inside to outside). */
+const bearingPoints = 5;
+/** Invented eccentricity of the column reaction toward the inner flange edge, m (more than b/6: lift-off). */
+const rollEccentricity = 0.07;
+
+/**
+ * A rigid flange on `bearingPoints` equal springs: forces linear across the width, in equilibrium with
+ * the column reaction R and the roll moment M = -R e (inner edge loaded). Tensionless points that
+ * would pull are dropped and the rest re-solved until none pulls (the active-set idea in miniature).
+ */
+function bearingForces(reaction: number, tensionless: boolean): number[] {
+  const x = Array.from({ length: bearingPoints }, (_, i) => -ring.b / 2 + (ring.b * i) / (bearingPoints - 1));
+  const moment = -reaction * rollEccentricity;
+  let active = x.map(() => true);
+  for (;;) {
+    const xs = x.filter((_, i) => active[i]);
+    const n = xs.length;
+    const sx = xs.reduce((a, b) => a + b, 0);
+    const sxx = xs.reduce((a, b) => a + b * b, 0);
+    // Solve [n sx; sx sxx] [a; c] = [R; M] for f_i = a + c x_i.
+    const det = n * sxx - sx * sx;
+    const a = (reaction * sxx - moment * sx) / det;
+    const c = (n * moment - sx * reaction) / det;
+    const forces = x.map((xi, i) => (active[i] ? a + c * xi : 0));
+    if (!tensionless || forces.every((f) => f >= -1e-9)) return forces.map((f) => (Math.abs(f) < 1e-9 ? 0 : f));
+    active = active.map((on, i) => on && (forces[i] ?? 0) > 0);
+  }
+}
+
+function bearingsOf(combination: CombinationSummary, scenarioId: string): AnalysisSummary['bearings'] {
+  if (scenarioId === 'web-line') return undefined;
+  const { vertical } = factoredLineLoads(combination);
+  const forces = bearingForces((vertical * perimeter) / columns, scenarioId === 'contact');
+  return {
+    contactFraction: forces.filter((f) => f > 0).length / forces.length,
+    maxCompression: Math.max(0, ...forces),
+    maxTension: Math.max(0, ...forces.map((f) => -f)),
+    mostLoadedColumn: { group: 'C1 cap', forces },
+  };
+}
+
 function peakAbs(values: number[]): number {
   return values.reduce((peak, value) => Math.max(peak, Math.abs(value)), 0);
 }
@@ -211,6 +252,7 @@ function analysis(combination: CombinationSummary, scenario: ScenarioSummary, in
   // A deterministic, tiny closing error, as a real solve would leave.
   const closing = 1 + (index + 1) * 3e-11;
   const factors = scenarioFactors[scenario.id];
+  const bearings = bearingsOf(combination, scenario.id);
   return {
     combination: combination.name,
     scenario: scenario.id,
@@ -228,6 +270,7 @@ function analysis(combination: CombinationSummary, scenario: ScenarioSummary, in
       B: peakAbs(diagram.B),
     },
     diagram,
+    ...(bearings === undefined ? {} : { bearings }),
   };
 }
 
@@ -555,7 +598,8 @@ export function demoDesignResult(): DesignResult {
       design: { grades: ['S355'], credibleScenarios: ['contact'], families: ['HE B'], notes: [] },
     },
     bin: { diameter, cylinderHeight, hopperHeight, apexHalfAngle, solid: 'Invented grain-like solid' },
-    girder: { kind: 'ring', radius, columns, segments, spanAngle },
+    girder: { kind: 'ring',
+    support: 'columns', radius, columns, segments, spanAngle },
     loads: {
       cases,
       combinations,
@@ -563,7 +607,10 @@ export function demoDesignResult(): DesignResult {
       totals: { solidWeight, structureWeight },
       derivation: derivation(),
     },
-    scenarios,
+    scenarios: scenarios.map((scenario) => {
+      const tension = Math.max(0, ...analyses.filter((a) => a.scenario === scenario.id).map((a) => a.bearings?.maxTension ?? 0));
+      return { ...scenario, needsTension: tension > 0, maxBearingTension: tension };
+    }),
     analyses,
     members,
     utilisations: evaluated.map((entry) => entry.row),
