@@ -5,9 +5,9 @@ import { parse, View } from 'vega';
 import { compile } from 'vega-lite';
 import type { TopLevelSpec } from 'vega-lite';
 import type { AnalysisSummary, DesignResult, PressureProfile, UtilisationRow } from '@binsupport/design';
-import { toDegrees, toKilonewtonMetres, toKilonewtonSquareMetres, toKilopascals } from './units.js';
-import { utilisationBand, UTILISATION_RED } from './report-data.js';
-import type { UtilisationBand } from './report-data.js';
+import { toDegrees, toKilonewtonMetres, toKilonewtonSquareMetres, toKilonewtons, toKilopascals } from './units.js';
+import { columnAngles, utilisationBand, UTILISATION_RED } from './report-data.js';
+import type { BearingPanel, UtilisationBand } from './report-data.js';
 
 /** Series colours: our own, chosen to stay distinct in greyscale print. */
 export const SERIES_COLOURS = ['#1b4f72', '#b9770e', '#1e8449', '#7d3c98', '#a93226', '#5d6d7e'];
@@ -121,9 +121,15 @@ interface DiagramPoint {
   model: string;
 }
 
+/** Column positions in degrees, for rules and axis labels: C1 at 0 degrees, counter-clockwise. */
+export function columnMarks(columns: number): Array<{ angle: number; label: string }> {
+  return columnAngles(columns).map((angle, j) => ({ angle: toDegrees(angle), label: `C${j + 1}` }));
+}
+
 /**
  * Bending moment My, torsion T and bimoment B around the girder for one combination, one line per
- * support scenario (credible scenarios solid, comparison-only scenarios dashed).
+ * support scenario (credible scenarios solid, comparison-only scenarios dashed), with a vertical
+ * rule at each column and the columns named on the position axis.
  */
 export function forceDiagramSpec(result: DesignResult, combination: string): TopLevelSpec {
   const analyses: AnalysisSummary[] = result.analyses.filter((a) => a.combination === combination);
@@ -169,15 +175,19 @@ export function forceDiagramSpec(result: DesignResult, combination: string): Top
       height: 66,
       layer: [
         { mark: { type: 'rule', color: '#5d6d7e', strokeWidth: 0.6 }, encoding: { y: { datum: 0, type: 'quantitative' } } },
+        ...columnMarks(result.girder.columns).map((column) => ({
+          mark: { type: 'rule' as const, color: '#9aa5b1', strokeWidth: 0.7, strokeDash: [2, 2] },
+          encoding: { x: { datum: column.angle, type: 'quantitative' as const } },
+        })),
         {
           mark: { type: 'line', strokeWidth: 1.3 },
           encoding: {
             x: {
               field: 'angle',
               type: 'quantitative',
-              title: 'Position around the bin θ [°] (from +X, counter-clockwise seen from above)',
+              title: 'Position around the bin θ [°] (from +X, counter-clockwise seen from above); dotted rules: columns C1...Cn',
               scale: { domain: [0, 360], nice: false },
-              axis: { values: [0, 45, 90, 135, 180, 225, 270, 315, 360] },
+              axis: columnAxis(result.girder.columns),
             },
             y: { field: 'value', type: 'quantitative', title: null },
             color: {
@@ -196,6 +206,91 @@ export function forceDiagramSpec(result: DesignResult, combination: string): Top
               scale: { domain: ['design envelope', 'comparison only'], range: [[1, 0], [5, 3]] },
             },
             order: { field: 'angle', type: 'quantitative' },
+          },
+        },
+      ],
+    },
+  };
+}
+
+/**
+ * The position axis: at the columns (labelled with the column and its angle) when they are few enough
+ * to label, else every 30 degrees.
+ */
+function columnAxis(columns: number): { values: number[]; labelExpr?: string; labelFontSize?: number } {
+  if (columns > 12) return { values: Array.from({ length: 13 }, (_, i) => 30 * i) };
+  const marks = columnMarks(columns);
+  const values = [...marks.map((m) => m.angle), 360];
+  // Column j+1 at 360 j / n; 360 degrees is C1 again.
+  const step = 360 / columns;
+  return { values, labelExpr: `'C' + (round(datum.value / ${step}) % ${columns} + 1) + ' ' + format(datum.value, '.4~') + '°'`, labelFontSize: 8 };
+}
+
+/** One bar of a bearing chart: the force of one bearing point, kN (compression positive). */
+export interface BearingBar {
+  panel: string;
+  point: number;
+  /** Position label across the flange: 1 (inside) ... n (outside). */
+  position: string;
+  force: number;
+  state: 'in contact' | 'lift-off' | 'tension';
+  text: string;
+}
+
+/** The title of a bearing panel: scenario, combination and the column cap shown. */
+export function bearingPanelTitle(panel: BearingPanel): string {
+  return `${panel.scenario.id}, ${panel.combination}, ${panel.bearings.mostLoadedColumn.group}`;
+}
+
+/** Bars of the bearing-point forces of the most loaded column of each panel, inside to outside. */
+export function bearingBars(panels: BearingPanel[]): BearingBar[] {
+  return panels.flatMap((panel) => {
+    const forces = panel.bearings.mostLoadedColumn.forces;
+    return forces.map((force, i): BearingBar => {
+      const value = toKilonewtons(force);
+      // Forces are compression positive: zero is a point that lifted off, below zero one that pulls.
+      const state = force > 0 ? 'in contact' : force < 0 ? 'tension' : 'lift-off';
+      const position = i === 0 ? `${i + 1} inside` : i === forces.length - 1 ? `${i + 1} outside` : String(i + 1);
+      return { panel: bearingPanelTitle(panel), point: i + 1, position, force: value, state, text: state === 'lift-off' ? 'lift-off' : value.toFixed(1) };
+    });
+  });
+}
+
+export const BEARING_COLOURS: Record<BearingBar['state'], string> = { 'in contact': '#1b4f72', 'lift-off': '#9aa5b1', tension: '#a93226' };
+
+/** Bearing-point forces across the flange, one panel per scenario; lift-off is a zero bar, tension red. */
+export function bearingChartSpec(panels: BearingPanel[]): TopLevelSpec {
+  const bars = bearingBars(panels);
+  const states: Array<BearingBar['state']> = ['in contact', 'lift-off', 'tension'];
+  const positions = [...new Set(bars.map((bar) => bar.position))];
+  const titles = panels.map(bearingPanelTitle);
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    config: chartConfig,
+    data: { values: bars },
+    facet: { field: 'panel', type: 'nominal', title: null, sort: titles, header: { labelFontSize: 9, labelFontWeight: 'bold', labelLimit: 240 } },
+    columns: 2,
+    spacing: { column: 16, row: 10 },
+    resolve: { scale: { y: 'shared' } },
+    spec: {
+      width: 190,
+      height: 110,
+      layer: [
+        {
+          mark: { type: 'bar', width: 16 },
+          encoding: {
+            x: { field: 'position', type: 'ordinal', sort: positions, title: 'Bearing point across the flange, inside → outside', axis: { labelAngle: 0 } },
+            y: { field: 'force', type: 'quantitative', title: 'Force, compression + [kN]' },
+            color: { field: 'state', type: 'nominal', title: 'Bearing point', scale: { domain: states, range: states.map((state) => BEARING_COLOURS[state]) } },
+          },
+        },
+        { mark: { type: 'rule', color: '#5d6d7e', strokeWidth: 0.6 }, encoding: { y: { datum: 0, type: 'quantitative' } } },
+        {
+          mark: { type: 'text', dy: -5, fontSize: 7.5, baseline: 'bottom' },
+          encoding: {
+            x: { field: 'position', type: 'ordinal', sort: positions },
+            y: { field: 'force', type: 'quantitative' },
+            text: { field: 'text', type: 'nominal' },
           },
         },
       ],

@@ -11,6 +11,8 @@ import type {
 } from '@binsupport/design';
 import { atomicWrite } from './atomic-write.js';
 import {
+  bearingChartSpec,
+  bearingPanelTitle,
   forceDiagramSpec,
   pressureChartSpec,
   renderChartSvg,
@@ -18,9 +20,11 @@ import {
   utilisationChartSpec,
 } from './charts.js';
 import { flattenJson } from './flatten.js';
+import { supportPlan } from './plan.js';
 import { renderPdfDefinition, svgNode } from './pdf-engine.js';
 import type { PdfContent, PdfDocumentDefinition, PdfNode, PdfTableLayout } from './pdf-engine.js';
 import {
+  bearingPanels,
   combinationExpression,
   equilibrium,
   issueDate,
@@ -30,7 +34,7 @@ import {
   tonnageBySection,
   utilisationBand,
 } from './report-data.js';
-import type { ReportOptions } from './report-data.js';
+import type { BearingPanel, ReportOptions } from './report-data.js';
 import {
   formatAngle,
   formatForce,
@@ -144,7 +148,7 @@ function utilisationCell(utilisation: number | null, alignment: PdfNode['alignme
 /** A table with a repeated header row. */
 function table(header: PdfNode[], rows: PdfContent[][], widths: Array<number | string>): PdfNode {
   return {
-    table: { headerRows: 1, widths, body: [header, ...rows], dontBreakRows: true },
+    table: { headerRows: 1, widths, body: [header, ...rows], dontBreakRows: true, keepWithHeaderRows: 1 },
     layout: gridLayout,
     style: 'table',
   };
@@ -245,6 +249,47 @@ function scopeSection(result: DesignResult): PdfContent[] {
 // ----------------------------------------------------------------------------------------------
 // Section 2: inputs
 
+/** Figure 2.1: plan of the ring and columns with the governing position of each member. */
+function planFigure(result: DesignResult): PdfNode {
+  const plan = supportPlan(result);
+  const rows: PdfContent[][] = result.members.map((member, i) => {
+    const marker = plan.markers[i];
+    return [
+      { text: member.id, bold: true, color: marker?.colour ?? colours.heading },
+      member.section,
+      utilisationCell(member.utilisation),
+      member.governing.title,
+      member.governing.combination,
+      { text: member.governing.position.description },
+      numberCell(formatAngle(member.governing.position.angle)),
+    ];
+  });
+  return {
+    stack: [
+      svgNode(plan.svg, 300, [0, 6, 0, 2]),
+      {
+        table: {
+          headerRows: 1,
+          widths: [36, 48, 44, '*', 56, 110, 32],
+          body: [
+            [headerCell('Member'), headerCell('Section'), headerCell('Utilisation', 'right'), headerCell('Governing check'), headerCell('Combination'), headerCell('Position'), headerCell('θ', 'right')],
+            ...rows,
+          ],
+          dontBreakRows: true,
+        },
+        layout: gridLayout,
+        style: 'table',
+      },
+      caption(
+        `Figure 2.1. Plan of the support layout seen from above: the girder axis of radius ${formatLengthM(result.girder.radius)}, ` +
+          `columns C1 to C${result.girder.columns} at ${formatAngle(result.girder.spanAngle)} spacing from +X, counter-clockwise, ` +
+          'and the position where each member is governed (diamond in the colour of the member, with its utilisation).',
+      ),
+    ],
+    unbreakable: true,
+  };
+}
+
 function inputsSection(result: DesignResult): PdfContent[] {
   const { bin, girder } = result;
   const segmentLength = 2 * girder.radius * Math.sin(Math.PI / girder.segments);
@@ -267,6 +312,7 @@ function inputsSection(result: DesignResult): PdfContent[] {
       ['Arc length between columns', formatLengthM(girder.radius * girder.spanAngle)],
       ['Elements in the ring model', `${girder.segments} straight segments of ${formatLengthMm(segmentLength)} chord`],
     ]),
+    planFigure(result),
   ];
   const echo = flattenJson(result.input);
   content.push(subheading('2.3 Validated specification (SI base units)'));
@@ -494,14 +540,62 @@ async function analysisSection(result: DesignResult): Promise<PdfContent[]> {
         caption(
           `Figure 5.${figure}. Combination ${combination.name} (${combination.expression}): bending moment My, torsion T and ` +
             'bimoment B against the position around the bin, one line per support scenario (by id, see section 4; dashed: comparison only). ' +
-            'My > 0 puts the top fibre in tension (hogging); a sagging girder has My < 0.',
+            'My > 0 puts the top fibre in tension (hogging); a sagging girder has My < 0. Dotted vertical rules mark the columns.',
         ),
       ],
       unbreakable: true,
     });
     figure += 1;
   }
+  content.push(...(await bearingSection(result, figure)));
   return content;
+}
+
+function percent(fraction: number): string {
+  return `${Math.round(fraction * 100)} %`;
+}
+
+/** The sentence under a bearing panel: contact, peak compression, tension flagged, least contact. */
+export function bearingSentence(panel: BearingPanel): string {
+  const { bearings } = panel;
+  const forces = bearings.mostLoadedColumn.forces;
+  const lifted = forces.filter((force) => force === 0).length;
+  const parts = [
+    `${panel.scenario.title} (${panel.scenario.id}), governing combination ${panel.combination}: ` +
+      `${percent(bearings.contactFraction)} of the bearing points are in contact; the largest compression in one point is ${formatForce(bearings.maxCompression)}.`,
+    lifted > 0
+      ? `At ${bearings.mostLoadedColumn.group} ${lifted} of ${forces.length} points lift off (zero bars).`
+      : `At ${bearings.mostLoadedColumn.group} every point presses.`,
+  ];
+  if (bearings.maxTension > 0) {
+    parts.push(`TENSION of up to ${formatForce(bearings.maxTension)} in one point: not available from a real bearing, which can only push; the scenario rests on it.`);
+  }
+  if (panel.leastContact !== undefined) {
+    parts.push(`The least contact of the scenario is ${percent(panel.leastContact.contactFraction)} of the points, under ${panel.leastContact.combination}.`);
+  }
+  return parts.join(' ');
+}
+
+async function bearingSection(result: DesignResult, figure: number): Promise<PdfContent[]> {
+  const panels = bearingPanels(result);
+  if (panels.length === 0) return [];
+  const svg = await renderChartSvg(bearingChartSpec(panels));
+  return [
+    {
+      stack: [
+        figureHeading(`5.${figure} Bearing contact at the most loaded column`),
+        paragraph(
+          'Forces in the bearing points across the bottom flange of the most loaded column cap, from the inner flange edge to the outer, ' +
+            'for the combination that governs each scenario with bearing points. A zero bar is a point that has lifted off; a bar below zero ' +
+            'is a point pulling on the flange.',
+        ),
+        svgNode(svg, Math.min(contentWidth, 440)),
+        caption(`Figure 5.${figure}. ${panels.map(bearingPanelTitle).join('; ')}. Forces in kN, compression positive.`),
+      ],
+      unbreakable: true,
+    },
+    { ul: panels.map((panel): PdfContent => ({ text: bearingSentence(panel), style: 'body', ...(panel.bearings.maxTension > 0 ? { color: colours.infeasible } : {}) })) },
+  ];
 }
 
 // ----------------------------------------------------------------------------------------------
@@ -742,8 +836,10 @@ export async function designPdfDefinition(result: DesignResult, options: ReportO
     }),
     // Keep a heading with what follows it: move it to the next page when nothing but headings
     // follows it on its own page.
+    // Also move a heading that starts in the last eighth of a page: too little room for what it heads.
     pageBreakBefore: (node, helpers) =>
-      node.headlineLevel !== undefined && helpers.getFollowingNodesOnPage().every((next) => next.headlineLevel !== undefined),
+      node.headlineLevel !== undefined &&
+      (helpers.getFollowingNodesOnPage().every((next) => next.headlineLevel !== undefined) || (node.startPosition.verticalRatio ?? 0) > 0.875),
     defaultStyle: { font: 'Roboto', fontSize: 8.5, lineHeight: 1.15 },
     styles: {
       kicker: { fontSize: 9, color: colours.muted, margin: [0, 0, 0, 2] },

@@ -52,26 +52,30 @@ export function supportPlan(result: DesignResult): SupportPlan {
   const parts: string[] = [];
   parts.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">`);
   parts.push(`<rect x="0" y="0" width="${width}" height="${height}" fill="white"/>`);
-  // Axes through the bin axis: +X and +Y, with the sense of theta.
-  const axisLength = ringRadius + 48;
-  parts.push(`<line x1="${fixed(centre.x - 18)}" y1="${fixed(centre.y)}" x2="${fixed(centre.x + axisLength)}" y2="${fixed(centre.y)}" stroke="${muted}" stroke-width="0.6" stroke-dasharray="4 3"/>`);
-  parts.push(`<line x1="${fixed(centre.x)}" y1="${fixed(centre.y + 18)}" x2="${fixed(centre.x)}" y2="${fixed(centre.y - axisLength)}" stroke="${muted}" stroke-width="0.6" stroke-dasharray="4 3"/>`);
-  parts.push(`<path d="M ${fixed(centre.x + axisLength)} ${fixed(centre.y)} l -7 -3 l 0 6 z" fill="${muted}"/>`);
-  parts.push(`<path d="M ${fixed(centre.x)} ${fixed(centre.y - axisLength)} l -3 7 l 6 0 z" fill="${muted}"/>`);
-  parts.push(`<text x="${fixed(centre.x + axisLength - 2)}" y="${fixed(centre.y + 13)}" ${font} fill="${muted}" text-anchor="end">+X (θ = 0°)</text>`);
-  parts.push(`<text x="${fixed(centre.x + 6)}" y="${fixed(centre.y - axisLength + 8)}" ${font} fill="${muted}">+Y (θ = 90°)</text>`);
-  // The sense of theta: an arc from +X toward +Y near the centre.
-  const arcRadius = 30;
-  const arcEnd = point(Math.PI / 3, arcRadius);
-  parts.push(`<path d="M ${fixed(centre.x + arcRadius)} ${fixed(centre.y)} A ${arcRadius} ${arcRadius} 0 0 0 ${fixed(arcEnd.x)} ${fixed(arcEnd.y)}" fill="none" stroke="${muted}" stroke-width="0.8"/>`);
+  // Centre lines through the bin axis, inside the ring.
+  const inside = ringRadius - 12;
+  parts.push(`<line x1="${fixed(centre.x - inside)}" y1="${fixed(centre.y)}" x2="${fixed(centre.x + inside)}" y2="${fixed(centre.y)}" stroke="${muted}" stroke-width="0.5" stroke-dasharray="6 2 1 2"/>`);
+  parts.push(`<line x1="${fixed(centre.x)}" y1="${fixed(centre.y + inside)}" x2="${fixed(centre.x)}" y2="${fixed(centre.y - inside)}" stroke="${muted}" stroke-width="0.5" stroke-dasharray="6 2 1 2"/>`);
+  // Orientation key in the lower left corner: +X to the right, +Y up, theta counter-clockwise.
+  const key = { x: 22, y: height - 22 };
+  const keyLength = 42;
+  parts.push(`<line x1="${key.x}" y1="${key.y}" x2="${key.x + keyLength}" y2="${key.y}" stroke="${muted}" stroke-width="0.8"/>`);
+  parts.push(`<line x1="${key.x}" y1="${key.y}" x2="${key.x}" y2="${key.y - keyLength}" stroke="${muted}" stroke-width="0.8"/>`);
+  parts.push(`<path d="M ${key.x + keyLength + 6} ${key.y} l -7 -3 l 0 6 z" fill="${muted}"/>`);
+  parts.push(`<path d="M ${key.x} ${key.y - keyLength - 6} l -3 7 l 6 0 z" fill="${muted}"/>`);
+  parts.push(`<text x="${key.x + keyLength + 9}" y="${key.y + 3}" ${font} fill="${muted}">+X (θ = 0°)</text>`);
+  parts.push(`<text x="${key.x + 5}" y="${key.y - keyLength - 1}" ${font} fill="${muted}">+Y (θ = 90°)</text>`);
+  // The sense of theta: an arc from +X toward +Y round the key's origin.
+  const arcRadius = 22;
+  const arcEnd = { x: key.x + arcRadius * Math.cos(Math.PI / 3), y: key.y - arcRadius * Math.sin(Math.PI / 3) };
+  parts.push(`<path d="M ${fixed(key.x + arcRadius)} ${fixed(key.y)} A ${arcRadius} ${arcRadius} 0 0 0 ${fixed(arcEnd.x)} ${fixed(arcEnd.y)}" fill="none" stroke="${muted}" stroke-width="0.8"/>`);
   // Arrow head along the counter-clockwise tangent (-sin a, cos a) in plan, (-sin a, -cos a) on the page.
   const tangent = { x: -Math.sin(Math.PI / 3), y: -Math.cos(Math.PI / 3) };
   const back = { x: arcEnd.x - 7 * tangent.x, y: arcEnd.y - 7 * tangent.y };
   parts.push(
     `<path d="M ${fixed(arcEnd.x)} ${fixed(arcEnd.y)} L ${fixed(back.x - 3 * tangent.y)} ${fixed(back.y + 3 * tangent.x)} L ${fixed(back.x + 3 * tangent.y)} ${fixed(back.y - 3 * tangent.x)} Z" fill="${muted}"/>`,
   );
-  const thetaLabel = point(Math.PI / 6, arcRadius + 8);
-  parts.push(`<text x="${fixed(thetaLabel.x)}" y="${fixed(thetaLabel.y)}" ${font} fill="${muted}">θ</text>`);
+  parts.push(`<text x="${fixed(key.x + arcRadius + 3)}" y="${fixed(key.y - 9)}" ${font} fill="${muted}">θ</text>`);
   // The girder axis.
   parts.push(`<circle cx="${fixed(centre.x)}" cy="${fixed(centre.y)}" r="${ringRadius}" fill="none" stroke="${ink}" stroke-width="3.5"/>`);
   // Radius dimension, drawn at 225 degrees where no column label sits for the usual column counts.
@@ -104,9 +108,12 @@ export function supportPlan(result: DesignResult): SupportPlan {
     parts.push(`<path d="M ${fixed(marker.x)} ${fixed(marker.y - 5)} l 5 5 l -5 5 l -5 -5 z" fill="${marker.colour}" stroke="white" stroke-width="0.6"/>`);
     const member = result.members[i];
     const text = `${marker.member} ${formatUtilisation(member?.utilisation ?? null)}`;
-    // The label on the side of the marker away from the ring's centre line, so it never crosses the axis.
-    const toRight = Math.cos(marker.angle) >= 0;
-    parts.push(`<text x="${fixed(marker.x + (toRight ? -8 : 8))}" y="${fixed(marker.y + 3)}" ${font} fill="${marker.colour}" font-weight="bold" text-anchor="${toRight ? 'end' : 'start'}">${escapeXml(text)}</text>`);
+    // The label on the side of the marker toward the bin axis, on a white ground so that no line crosses it.
+    const toLeft = Math.cos(marker.angle) >= 0;
+    const textWidth = 5.2 * text.length;
+    const left = toLeft ? marker.x - 8 - textWidth : marker.x + 8;
+    parts.push(`<rect x="${fixed(left - 2)}" y="${fixed(marker.y - 6)}" width="${fixed(textWidth + 4)}" height="12" fill="white"/>`);
+    parts.push(`<text x="${fixed(left)}" y="${fixed(marker.y + 3)}" ${font} fill="${marker.colour}" font-weight="bold">${escapeXml(text)}</text>`);
   });
   parts.push('</svg>');
   return { svg: parts.join(''), width, height, centre, ringRadius, columns, markers };

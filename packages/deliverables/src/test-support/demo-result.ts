@@ -203,7 +203,7 @@ function ringDiagram(combination: CombinationSummary, scenarioId: string): Force
 /** Bearing points across the bottom flange on each column cap (inside to outside). */
 const bearingPoints = 5;
 /** Invented eccentricity of the column reaction toward the inner flange edge, m (more than b/6: lift-off). */
-const rollEccentricity = 0.07;
+const rollEccentricity = 0.1;
 
 /**
  * A rigid flange on `bearingPoints` equal springs: forces linear across the width, in equilibrium with
