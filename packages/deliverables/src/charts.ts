@@ -217,13 +217,13 @@ export function forceDiagramSpec(result: DesignResult, combination: string): Top
  * The position axis: at the columns (labelled with the column and its angle) when they are few enough
  * to label, else every 30 degrees.
  */
-function columnAxis(columns: number): { values: number[]; labelExpr?: string; labelFontSize?: number } {
+function columnAxis(columns: number): { values: number[]; labelExpr?: string; labelFontSize?: number; labelOverlap?: boolean; labelFlush?: boolean } {
   if (columns > 12) return { values: Array.from({ length: 13 }, (_, i) => 30 * i) };
   const marks = columnMarks(columns);
   const values = [...marks.map((m) => m.angle), 360];
   // Column j+1 at 360 j / n; 360 degrees is C1 again.
   const step = 360 / columns;
-  return { values, labelExpr: `'C' + (round(datum.value / ${step}) % ${columns} + 1) + ' ' + format(datum.value, '.4~') + '°'`, labelFontSize: 8 };
+  return { values, labelExpr: `'C' + (round(datum.value / ${step}) % ${columns} + 1) + ' ' + format(datum.value, '.4~') + '°'`, labelFontSize: 7.5, labelOverlap: false, labelFlush: true };
 }
 
 /** One bar of a bearing chart: the force of one bearing point, kN (compression positive). */
@@ -279,7 +279,7 @@ export function bearingChartSpec(panels: BearingPanel[]): TopLevelSpec {
         {
           mark: { type: 'bar', width: 16 },
           encoding: {
-            x: { field: 'position', type: 'ordinal', sort: positions, title: 'Bearing point across the flange, inside → outside', axis: { labelAngle: 0 } },
+            x: { field: 'position', type: 'ordinal', sort: positions, title: 'Bearing point across the flange, inside to outside', axis: { labelAngle: 0 } },
             y: { field: 'force', type: 'quantitative', title: 'Force, compression + [kN]' },
             color: { field: 'state', type: 'nominal', title: 'Bearing point', scale: { domain: states, range: states.map((state) => BEARING_COLOURS[state]) } },
           },

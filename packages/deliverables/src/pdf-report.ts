@@ -560,12 +560,13 @@ export function bearingSentence(panel: BearingPanel): string {
   const { bearings } = panel;
   const forces = bearings.mostLoadedColumn.forces;
   const lifted = forces.filter((force) => force === 0).length;
+  const pulling = forces.filter((force) => force < 0).length;
+  const pressing = forces.length - lifted - pulling;
+  const state = [`${pressing} of ${forces.length} points press`, ...(lifted > 0 ? [`${lifted} lift${lifted === 1 ? 's' : ''} off (zero bars)`] : []), ...(pulling > 0 ? [`${pulling} pull${pulling === 1 ? 's' : ''} (bars below zero)`] : [])];
   const parts = [
     `${panel.scenario.title} (${panel.scenario.id}), governing combination ${panel.combination}: ` +
       `${percent(bearings.contactFraction)} of the bearing points are in contact; the largest compression in one point is ${formatForce(bearings.maxCompression)}.`,
-    lifted > 0
-      ? `At ${bearings.mostLoadedColumn.group} ${lifted} of ${forces.length} points lift off (zero bars).`
-      : `At ${bearings.mostLoadedColumn.group} every point presses.`,
+    `At ${bearings.mostLoadedColumn.group} ${state.length === 1 ? state[0] : `${state.slice(0, -1).join(', ')} and ${state[state.length - 1]}`}.`,
   ];
   if (bearings.maxTension > 0) {
     parts.push(`TENSION of up to ${formatForce(bearings.maxTension)} in one point: not available from a real bearing, which can only push; the scenario rests on it.`);

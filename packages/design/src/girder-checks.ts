@@ -1,0 +1,299 @@
+// Checks of the ring girder that are not cross-section checks at a station: the web over each column
+// cap (patch loading), the bottom flange under the bearing points, the ring under the hopper's pull
+// (in-plane buckling, transition-junction compression), anchors on a slab, and serviceability
+// (deflection and twist from the girder displacements). Each returns envelopes in the same shape as
+// the station checks, so that they become rows of the design's utilisations with clause, inputs,
+// intermediate values, combination, scenario and position.
+import type { AnalysisResult, GirderModel, Station } from '@binsupport/girder';
+import { lineLoadAt, type LoadSet } from '@binsupport/loads';
+import type { BinSpec } from '@binsupport/spec';
+import {
+  checkAnchorTension,
+  checkDeflection,
+  checkFlangeLocalBending,
+  checkJunctionRingCompression,
+  checkPatchLoading,
+  checkRingInPlaneBuckling,
+  checkTwist,
+  type CheckResult,
+  type SteelGrade,
+  type SteelSection,
+} from '@binsupport/steel';
+import type { CheckEnvelope } from './evaluate.js';
+import type { RingLayout } from './ring.js';
+
+/** One analysed combination of one scenario, with the model it was analysed on. */
+export interface AnalysedCase {
+  scenario: string;
+  model: GirderModel;
+  analysis: AnalysisResult;
+}
+
+/** Serviceability limits (user inputs with documented defaults). */
+export interface ServiceabilityLimits {
+  /** Deflection limit as span / ratio (default 500; common practice, EN 1993-1-1 7.2 leaves it to the project). */
+  deflectionLimitRatio: number;
+  /** Twist limit, rad (default 0.01; common practice). */
+  twistLimit: number;
+}
+
+export const DEFAULT_SERVICEABILITY: ServiceabilityLimits = { deflectionLimitRatio: 500, twistLimit: 0.01 };
+
+/** The station at the start of the element that leaves a node (x = 0): the place of a node check. */
+function stationAtNode(model: GirderModel, analysis: AnalysisResult, node: string): Station | undefined {
+  const element = model.elements.find((candidate) => candidate.nodeI === node);
+  return analysis.stations.find((station) => station.element === element?.id && station.x === 0);
+}
+
+function nodeAngleOf(model: GirderModel, node: string): number {
+  const found = model.nodes.find((candidate) => candidate.id === node);
+  if (!found) return 0;
+  const angle = Math.atan2(found.y, found.x);
+  return angle < 0 ? angle + 2 * Math.PI : angle;
+}
+
+/** Keep the worst result per check id of one (combination, scenario). */
+function keepWorst(worst: Map<string, CheckEnvelope>, check: CheckResult, combination: string, scenario: string, station: Station | undefined): void {
+  if (!station) return;
+  const current = worst.get(check.id);
+  if (!current || check.utilisation > current.check.utilisation) worst.set(check.id, { check, combination, scenario, station });
+}
+
+/** A bearing spring with its place across the flange (signed, outward positive) and its force. */
+interface BearingPoint {
+  id: string;
+  node: string;
+  group: string;
+  across: number;
+  tributaryLength: number;
+  /** N, compression positive */
+  force: number;
+  tensionCapacity?: number;
+}
+
+/** The bearing points (cap or slab springs) of an analysis, with their offsets across the flange. */
+export function bearingPoints(model: GirderModel, analysis: AnalysisResult): BearingPoint[] {
+  const forces = new Map(analysis.springForces.map((spring) => [spring.id, spring.force]));
+  const points: BearingPoint[] = [];
+  for (const spring of model.springs ?? []) {
+    if (!spring.group || spring.tributaryLength === undefined) continue;
+    const node = model.nodes.find((candidate) => candidate.id === spring.node);
+    if (!node) continue;
+    const r = Math.hypot(node.x, node.y);
+    const offset = spring.offset ?? [0, 0, 0];
+    const across = r > 0 ? (offset[0] * node.x + offset[1] * node.y) / r : 0;
+    const behaviour = spring.behaviour;
+    points.push({
+      id: spring.id,
+      node: spring.node,
+      group: spring.group,
+      across,
+      tributaryLength: spring.tributaryLength,
+      force: forces.get(spring.id) ?? 0,
+      ...(typeof behaviour === 'object' && behaviour.kind === 'anchored' ? { tensionCapacity: behaviour.tensionCapacity } : {}),
+    });
+  }
+  return points;
+}
+
+/** Column reactions of a ring on columns: per column node, the vertical reaction and its moment about the column axis. */
+export interface ColumnReaction {
+  /** column index j (0-based) */
+  index: number;
+  node: string;
+  /** Vertical reaction on the girder, N, upward positive (the column's compression). */
+  force: number;
+  /**
+   * Moment of the reaction about the column's centre line, N m: sum F_i x offset_i across the flange
+   * (outward positive), i.e. about the tangential axis at the column top.
+   */
+  moment: number;
+  /** The forces of the cap's bearing points (inside to outside), N; empty for a point support. */
+  points: number[];
+}
+
+/** Reactions at the columns (cap springs or the point support under the web). */
+export function columnReactions(model: GirderModel, analysis: AnalysisResult, layout: RingLayout): ColumnReaction[] {
+  const points = bearingPoints(model, analysis);
+  const result: ColumnReaction[] = [];
+  for (let j = 0; j < layout.columns; j++) {
+    const node = model.nodes[j * layout.segmentsPerSpan]?.id ?? '';
+    const cap = points.filter((point) => point.node === node && point.id.includes('-cap-'));
+    if (cap.length > 0) {
+      result.push({ index: j, node, force: cap.reduce((sum, point) => sum + point.force, 0), moment: cap.reduce((sum, point) => sum + point.force * point.across, 0), points: cap.map((point) => point.force) });
+      continue;
+    }
+    const reaction = analysis.reactions.find((candidate) => candidate.node === node);
+    if (reaction) result.push({ index: j, node, force: reaction.force[2], moment: 0, points: [] });
+  }
+  return result;
+}
+
+/**
+ * Web over each column cap, EN 1993-1-5 section 6 (type a: the force enters through the bottom flange
+ * and is resisted by web shear on both sides): F_Ed = the column's reaction (the sum of its cap's
+ * bearing-point forces, or the point support's reaction), s_s = the cap plate length.
+ */
+function patchLoadingChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  if (layout.kind === 'slab') return;
+  for (const column of columnReactions(item.model, item.analysis, layout)) {
+    const check = checkPatchLoading(section, grade, { force: Math.max(0, column.force), stiffBearingLength: spec.support.capPlateLength, type: 'a' });
+    keepWorst(worst, { ...check, inputs: { ...check.inputs, column: column.index + 1 } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, column.node));
+  }
+}
+
+/**
+ * Bottom flange under the bearing: each bearing point's force as a line load over its tributary
+ * length, q = F / l_trib, at its distance from the web centre (common practice, cantilever outstand).
+ */
+function flangeBendingChecks(section: SteelSection, grade: SteelGrade, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  const halfWidth = section.dimensions.flangeWidth / 2;
+  for (const point of bearingPoints(item.model, item.analysis)) {
+    if (point.force === 0 || point.tributaryLength <= 0) continue;
+    const check = checkFlangeLocalBending(section, grade, { lineLoad: point.force / point.tributaryLength, distanceFromWebCentre: Math.min(Math.abs(point.across), halfWidth) });
+    keepWorst(worst, { ...check, inputs: { ...check.inputs, F: point.force, l_trib: point.tributaryLength } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, point.node));
+  }
+}
+
+/**
+ * The factored radial (inward) line load of a combination at the support line: the largest over the
+ * ring's nodes (the uniform part plus any harmonics), N/m, and the node where it occurs.
+ */
+export function radialPull(loads: LoadSet, factors: Record<string, number>, model: GirderModel): { q: number; node: string } {
+  let best = { q: -Infinity, node: model.nodes[0]?.id ?? '' };
+  for (const node of model.nodes) {
+    const angle = nodeAngleOf(model, node.id);
+    let q = 0;
+    for (const loadCase of loads.cases) q += (factors[loadCase.name] ?? 0) * lineLoadAt(loadCase, angle).radial;
+    if (q > best.q) best = { q, node: node.id };
+  }
+  return { q: Math.max(0, best.q), node: best.node };
+}
+
+/**
+ * The ring under the hopper's radial pull: in-plane buckling (q_cr = 3 E I / R^3 with I about the
+ * ring's vertical axis, the weak axis I_z of a vertical-web girder; R the girder radius) and the
+ * compression of the transition junction (EN 1993-4-1 effective section: the girder plus the
+ * effective lengths of the cylinder wall and the hopper; no skirt).
+ */
+function ringChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, loads: LoadSet, layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  const factors = loads.combinations.find((combination) => combination.name === item.analysis.combination)?.factors ?? {};
+  const pull = radialPull(loads, factors, item.model);
+  const station = stationAtNode(item.model, item.analysis, pull.node);
+  keepWorst(worst, checkRingInPlaneBuckling({ radialLineLoad: pull.q, radius: layout.radius, secondMomentOfArea: section.properties.secondMomentOfAreaZ }, grade), item.analysis.combination, item.scenario, station);
+  const junction = {
+    radius: spec.bin.diameter / 2 + spec.bin.wallThickness / 2,
+    cylinderThickness: spec.bin.wallThickness,
+    hopperThickness: spec.bin.hopper.thickness,
+    hopperHalfAngle: spec.bin.hopper.apexHalfAngle,
+    ringArea: section.properties.area,
+    ringThickness: Math.max(section.dimensions.flangeThickness, section.dimensions.webThickness),
+  };
+  keepWorst(worst, checkJunctionRingCompression(junction, grade, pull.q), item.analysis.combination, item.scenario, station);
+}
+
+/**
+ * Anchors on a slab: at each node, the anchored bearing points' tension per metre of girder,
+ * sum max(0, -F_i) / l_trib, against the anchor capacity per metre (support.anchorCapacity, a design
+ * resistance supplied by the user, EN 1992-4). The model yields an anchor at its capacity, so a
+ * utilisation of 1 means the anchors there are at capacity.
+ */
+function anchorChecks(spec: BinSpec, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  if (spec.support.anchorCapacity <= 0) return;
+  const byNode = new Map<string, { tension: number; length: number; atCapacity: number }>();
+  const states = new Map(item.analysis.springForces.map((spring) => [spring.id, spring.state]));
+  for (const point of bearingPoints(item.model, item.analysis)) {
+    if (point.tensionCapacity === undefined) continue;
+    const entry = byNode.get(point.node) ?? { tension: 0, length: point.tributaryLength, atCapacity: 0 };
+    entry.tension += Math.max(0, -point.force);
+    if (states.get(point.id) === 'at-capacity') entry.atCapacity += 1;
+    byNode.set(point.node, entry);
+  }
+  for (const [node, entry] of byNode) {
+    const check = checkAnchorTension({ tensionPerAnchor: entry.tension / entry.length, resistancePerAnchor: spec.support.anchorCapacity });
+    const stated: CheckResult = {
+      ...check,
+      title: 'Anchors in tension (per metre of girder)',
+      clause: 'resistance per EN 1992-4, supplied by the user as a capacity per metre (support.anchorCapacity)',
+      inputs: { ...check.inputs, 'sum tension': entry.tension, l_trib: entry.length },
+      intermediate: { ...check.intermediate, anchorsAtCapacity: entry.atCapacity },
+      ...(entry.atCapacity > 0 ? { notes: ['anchors at capacity (yielding)'] } : {}),
+    };
+    keepWorst(worst, stated, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, node));
+  }
+}
+
+/**
+ * Serviceability of a ring on columns: the deflection of each node relative to the straight line
+ * between the two columns of its span (so the column shortening and the cap's bearing settlement do
+ * not count), against span / ratio with the span the arc between columns, 2 pi R / n; and the twist
+ * of each node, the rotation about the girder axis phi = r . t (t the tangent, the elements' local x),
+ * against the twist limit. On a slab the deflection is the bearing settlement (information only, see
+ * `settlementOf`); the twist is checked.
+ */
+function serviceabilityChecks(layout: RingLayout, limits: ServiceabilityLimits, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  const { model, analysis } = item;
+  const displacement = new Map(analysis.displacements.map((d) => [d.node, d]));
+  const N = model.nodes.length;
+  const span = (2 * Math.PI * layout.radius) / layout.columns;
+  model.nodes.forEach((node, k) => {
+    const d = displacement.get(node.id);
+    if (!d) return;
+    const angle = nodeAngleOf(model, node.id);
+    const twist = -d.rx * Math.sin(angle) + d.ry * Math.cos(angle);
+    const station = stationAtNode(model, analysis, node.id);
+    const twistCheck = checkTwist({ twist, limit: limits.twistLimit });
+    keepWorst(worst, twistCheck, analysis.combination, item.scenario, station);
+    if (layout.kind === 'slab') return;
+    const s = layout.segmentsPerSpan;
+    const first = Math.floor(k / s) * s;
+    const t = (k - first) / s;
+    const uzFirst = displacement.get(model.nodes[first % N]?.id ?? '')?.uz ?? 0;
+    const uzNext = displacement.get(model.nodes[(first + s) % N]?.id ?? '')?.uz ?? 0;
+    const reference = (1 - t) * uzFirst + t * uzNext;
+    const check = checkDeflection({ deflection: d.uz - reference, span, limitRatio: limits.deflectionLimitRatio });
+    keepWorst(worst, { ...check, inputs: { ...check.inputs, u_z: d.uz, u_z_supports: reference } }, analysis.combination, item.scenario, station);
+  });
+}
+
+/** Largest downward settlement of the girder on its bearing (information for a slab), m. */
+export function settlementOf(analysis: AnalysisResult): number {
+  return Math.max(0, ...analysis.displacements.map((d) => -d.uz));
+}
+
+/** What the extra checks need besides the section: spec, loads, layout, limits. */
+export interface GirderCheckContext {
+  spec: BinSpec;
+  loads: LoadSet;
+  layout: RingLayout;
+  serviceability: ServiceabilityLimits;
+}
+
+/**
+ * The checks that follow from the forces of analysed cases and hold for any candidate section
+ * (reactions, bearing forces and the radial pull do not depend on the candidate being checked):
+ * patch loading, flange bending, ring buckling, junction compression, anchors. ULS cases only.
+ */
+export function forceChecks(context: GirderCheckContext, section: SteelSection, grade: SteelGrade, cases: AnalysedCase[]): CheckEnvelope[] {
+  const envelopes: CheckEnvelope[] = [];
+  for (const item of cases) {
+    const worst = new Map<string, CheckEnvelope>();
+    patchLoadingChecks(section, grade, context.spec, context.layout, item, worst);
+    flangeBendingChecks(section, grade, item, worst);
+    ringChecks(section, grade, context.spec, context.loads, context.layout, item, worst);
+    anchorChecks(context.spec, item, worst);
+    envelopes.push(...worst.values());
+  }
+  return envelopes;
+}
+
+/** Serviceability checks of the section's own displacements (SLS cases only). */
+export function displacementChecks(context: GirderCheckContext, cases: AnalysedCase[]): CheckEnvelope[] {
+  const envelopes: CheckEnvelope[] = [];
+  for (const item of cases) {
+    const worst = new Map<string, CheckEnvelope>();
+    serviceabilityChecks(context.layout, context.serviceability, item, worst);
+    envelopes.push(...worst.values());
+  }
+  return envelopes;
+}
