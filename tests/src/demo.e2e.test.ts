@@ -6,6 +6,7 @@ import { fileURLToPath } from 'node:url';
 import ExcelJS from 'exceljs';
 import { extractText, getDocumentProxy } from 'unpdf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parseSpecText } from '@binsupport/spec';
 
 // End to end: the `binsupport design` command on the invented demo bin, as a user runs it, and the
 // three deliverables read back as a user (or an outside script) would read them.
@@ -124,11 +125,48 @@ describe('binsupport design on the demo bin', () => {
   });
 });
 
+describe('spec-sheet workbook round trip', () => {
+  it('template -> workbook filled with the demo values -> design gives the same design.json as the YAML spec', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'binsupport-sheet-'));
+    const template = join(dir, 'spec.xlsx');
+    expect(spawnSync(process.execPath, [launcher, 'template', '--xlsx', template], { encoding: 'utf8' }).status).toBe(0);
+    // Fill the Value column from the YAML spec, as a user would type it (lists comma-separated).
+    const yaml = parseSpecText(readFileSync(demoSpec, 'utf8'), 'yaml') as Record<string, unknown>;
+    const valueAt = (path: string): unknown =>
+      path.split('.').reduce<unknown>((node, part) => {
+        if (node === undefined || node === null) return undefined;
+        const indexed = /^(.+)\[(\d+)\]$/.exec(part);
+        if (indexed) return ((node as Record<string, unknown[]>)[indexed[1] ?? ''] ?? [])[Number(indexed[2])];
+        return (node as Record<string, unknown>)[part];
+      }, yaml);
+    const workbook = new ExcelJS.Workbook();
+    await workbook.xlsx.readFile(template);
+    const sheet = workbook.getWorksheet('Spec');
+    expect(sheet).toBeDefined();
+    const header = (sheet?.getRow(1).values as unknown[]).map((cell) => String(cell ?? '').toLowerCase());
+    const pathColumn = header.findIndex((cell) => cell.startsWith('path') || cell.startsWith('input'));
+    const valueColumn = header.findIndex((cell) => cell.startsWith('value'));
+    sheet?.eachRow((row, index) => {
+      if (index === 1) return;
+      const value = valueAt(String(row.getCell(pathColumn).value ?? ''));
+      if (value === undefined) return;
+      row.getCell(valueColumn).value = Array.isArray(value) ? value.join(', ') : (value as ExcelJS.CellValue);
+    });
+    const filled = join(dir, 'filled.xlsx');
+    await workbook.xlsx.writeFile(filled);
+    const fromSheet = spawnSync(process.execPath, [launcher, 'design', filled, '--out', join(dir, 'out'), '--quiet'], { encoding: 'utf8', timeout: 170_000 });
+    expect(fromSheet.stderr).toBe('');
+    expect(fromSheet.status).toBe(0);
+    expect(readFileSync(join(dir, 'out', 'design.json'), 'utf8')).toBe(readFileSync(join(out, 'design.json'), 'utf8'));
+    rmSync(dir, { recursive: true, force: true });
+  });
+});
+
 describe('binsupport command line', () => {
   it('prints help and exits 0', () => {
     const help = spawnSync(process.execPath, [launcher, '--help'], { encoding: 'utf8' });
     expect(help.status).toBe(0);
-    expect(help.stdout).toMatch(/binsupport design <spec.yaml\|spec.json> --out <folder>/);
+    expect(help.stdout).toMatch(/binsupport design <spec> --out <folder>/);
     expect(help.stdout).toMatch(/qualified engineer/);
   });
 

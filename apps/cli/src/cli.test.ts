@@ -11,7 +11,7 @@ describe('binsupport command line', () => {
   it('prints the usage with the cautions for --help', async () => {
     const { streams, out } = capture();
     expect(await runCli(['--help'], streams)).toBe(EXIT_OK);
-    expect(out.join('')).toMatch(/binsupport design <spec.yaml\|spec.json> --out <folder>/);
+    expect(out.join('')).toMatch(/binsupport design <spec> --out <folder>/);
     expect(out.join('')).toMatch(/verified by a qualified engineer/);
   });
 

@@ -3,7 +3,7 @@ import { join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
 import { analyseModelFile, designFromSpec, DesignError, stableJson, type ModelFileResult } from '@binsupport/design';
 import { atomicWrite, writeDesignPdf, writeDesignXlsx } from '@binsupport/deliverables';
-import { readGirderModelFile, readSpecFile, SpecError } from '@binsupport/spec';
+import { readGirderModelFile, readSpecFile, SpecError, writeSpecTemplate } from '@binsupport/spec';
 import { runLoads, runMaterials, runSections } from './catalogue-commands.js';
 import { version } from './version.js';
 
@@ -20,11 +20,12 @@ export const EXIT_BAD_INPUT = 2;
 const mainHelp = `binsupport ${version}: design of the support girders of steel storage bins
 
 Usage:
-  binsupport design <spec.yaml|spec.json> --out <folder>   design a bin's support girder
-  binsupport analyse <model.json|model.yaml> [--json]      re-run one girder model (as written by design)
-  binsupport loads <spec> [--json]                         the load derivation of a spec, without the girder
-  binsupport materials [--json]                            the built-in stored solids
-  binsupport sections <family> [--json]                    a section family with its properties
+  binsupport design <spec> --out <folder>       design a bin's support girder (spec: .yaml, .json, .xlsx)
+  binsupport template --xlsx <spec.xlsx>        write a blank spec-sheet workbook to fill in
+  binsupport analyse <model> [--json]           re-run one girder model (as written by design)
+  binsupport loads <spec> [--json]              the load derivation of a spec, without the girder
+  binsupport materials [--json]                 the built-in stored solids
+  binsupport sections <family> [--json]         a section family with its properties
   binsupport --help | --version
 
 Run 'binsupport design --help' for the inputs and outputs of a design.
@@ -35,7 +36,7 @@ local codes and licensed practice govern.
 
 const designHelp = `Usage: binsupport design <spec> --out <folder> [--quiet]
 
-Reads a bin specification (YAML or JSON; see docs/input-reference.md for every input, its unit and
+Reads a bin specification (YAML, JSON or a filled spec-sheet workbook; see docs/input-reference.md for every input, its unit and
 range), derives the stored-solid loads (EN 1991-4), analyses the ring girder under every combination
 and support scenario, picks the lightest adequate section and writes to <folder>:
   design.json            the full result (SI units; docs/output-schema.md)
@@ -118,6 +119,31 @@ async function runDesign(args: string[], streams: CliStreams): Promise<number> {
   }
 }
 
+const templateHelp = `Usage: binsupport template --xlsx <spec.xlsx>
+
+Writes a blank spec-sheet workbook: one input per row with its unit, allowed range, default and note,
+drop-down lists for choices. Fill in the Value column and run 'binsupport design spec.xlsx --out dir'.
+An existing file is replaced whole.
+`;
+
+async function runTemplate(args: string[], streams: CliStreams): Promise<number> {
+  let parsed;
+  try {
+    parsed = parseArgs({ args, options: { xlsx: { type: 'string' }, help: { type: 'boolean' } } });
+  } catch (error) {
+    return fail(streams, EXIT_BAD_INPUT, `${(error as Error).message}\n\n${templateHelp}`);
+  }
+  if (parsed.values.help) {
+    streams.stdout.write(templateHelp);
+    return EXIT_OK;
+  }
+  const target = parsed.values.xlsx;
+  if (!target || !target.toLowerCase().endsWith('.xlsx')) return fail(streams, EXIT_BAD_INPUT, `template needs --xlsx <file.xlsx>\n\n${templateHelp}`);
+  await atomicWrite(resolve(target), await writeSpecTemplate());
+  streams.stderr.write(`wrote the spec-sheet template ${target}\n`);
+  return EXIT_OK;
+}
+
 function summaryLine(analysis: ModelFileResult['analyses'][number]): string {
   const peak = (key: 'N' | 'Vz' | 'T' | 'My' | 'B') => Math.max(...analysis.stations.map((station) => Math.abs(station[key])));
   const sums = analysis.reactionSum.map((value) => value.toExponential(4)).join(', ');
@@ -163,6 +189,7 @@ export async function runCli(argv: string[], streams: CliStreams): Promise<numbe
   if (command === 'design') return runDesign(rest, streams);
   if (command === 'analyse') return runAnalyse(rest, streams);
   if (command === 'loads') return runLoads(rest, streams);
+  if (command === 'template') return runTemplate(rest, streams);
   if (command === 'materials') return runMaterials(rest, streams);
   if (command === 'sections') return runSections(rest, streams);
   return fail(streams, EXIT_BAD_INPUT, `unknown command '${command}'\n\n${mainHelp}`);

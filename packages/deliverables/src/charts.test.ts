@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { forceDiagramSpec, pressureChartSpec, renderChartSvg, utilisationBars, utilisationChartSpec } from './charts.js';
+import { bearingBars, bearingChartSpec, forceDiagramSpec, pressureChartSpec, renderChartSvg, utilisationBars, utilisationChartSpec } from './charts.js';
+import { bearingPanels } from './report-data.js';
 import { formatUtilisation } from './units.js';
 import { demoDesignResult } from './test-support/demo-result.js';
 
@@ -72,5 +73,47 @@ describe('utilisation bars', () => {
     expect(bars.find((b) => b.label.endsWith('class-4-check'))).toMatchObject({ utilisation: 0, band: 'not evaluated', text: 'n/a' });
     expect(second.check).toBe(first.check); // the same check under another combination
     expect(bars.find((b) => b.label.endsWith(`: ${first.check}`))?.utilisation).toBe(Math.max(first.utilisation ?? 0, second.utilisation ?? 0));
+  });
+});
+
+describe('column positions on the force diagram', () => {
+  it('draws a rule at every column angle and names the columns on the position axis', () => {
+    const result = demoDesignResult();
+    const spec = forceDiagramSpec(result, 'ULS-1') as { spec: { layer: Array<{ mark: { type: string }; encoding: { x?: { datum?: number; axis?: { values?: number[] } } } }> } };
+    const rules = spec.spec.layer.filter((layer) => layer.mark.type === 'rule' && layer.encoding.x?.datum !== undefined).map((layer) => layer.encoding.x?.datum);
+    expect(rules).toEqual(Array.from({ length: result.girder.columns }, (_, j) => (360 * j) / result.girder.columns));
+    const line = spec.spec.layer.find((layer) => layer.mark.type === 'line');
+    expect(line?.encoding.x?.axis?.values).toEqual([0, 45, 90, 135, 180, 225, 270, 315, 360]);
+  });
+
+  it('labels the axis C1 0° ... C1 360° in the rendered chart', async () => {
+    const svg = await renderChartSvg(forceDiagramSpec(demoDesignResult(), 'ULS-1'));
+    for (const label of ['C1 0°', 'C2 45°', 'C5 180°', 'C8 315°', 'C1 360°']) {
+      expect(svg).toContain(`>${label}</text>`);
+    }
+  });
+});
+
+describe('bearing chart', () => {
+  it('shows each bearing point of the most loaded column in kN, lift-off as zero and tension below zero', async () => {
+    const result = demoDesignResult();
+    const panels = bearingPanels(result);
+    expect(panels.map((p) => `${p.scenario.id}/${p.combination}/${p.role}`)).toEqual(['contact/ULS-2/governing', 'bonded/ULS-2/governing']);
+    const bars = bearingBars(panels);
+    panels.forEach((panel, p) => {
+      const own = bars.filter((bar) => bar.panel === bars[p * panel.bearings.mostLoadedColumn.forces.length]?.panel);
+      expect(own.map((bar) => bar.force)).toEqual(panel.bearings.mostLoadedColumn.forces.map((f) => f / 1000));
+      expect(own[0]?.position).toBe('1 inside');
+      expect(own[own.length - 1]?.position).toMatch(/ outside$/);
+    });
+    const contact = bars.filter((bar) => bar.panel.startsWith('contact'));
+    expect(contact.filter((bar) => bar.state === 'lift-off').every((bar) => bar.force === 0 && bar.text === 'lift-off')).toBe(true);
+    expect(contact.some((bar) => bar.state === 'lift-off')).toBe(true);
+    const bonded = bars.filter((bar) => bar.panel.startsWith('bonded'));
+    expect(bonded.filter((bar) => bar.state === 'tension').every((bar) => bar.force < 0)).toBe(true);
+    expect(bonded.some((bar) => bar.state === 'tension')).toBe(true);
+    const svg = await renderChartSvg(bearingChartSpec(panels));
+    expect(svg).toContain('lift-off');
+    expect(svg).toContain('Bearing point across the flange, inside to outside');
   });
 });

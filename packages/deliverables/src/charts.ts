@@ -237,9 +237,9 @@ export interface BearingBar {
   text: string;
 }
 
-/** The title of a bearing panel: scenario, combination and the column cap shown. */
+/** The title of a bearing panel: scenario and combination (the column cap is named in the sentence below). */
 export function bearingPanelTitle(panel: BearingPanel): string {
-  return `${panel.scenario.id}, ${panel.combination}, ${panel.bearings.mostLoadedColumn.group}`;
+  return `${panel.scenario.id}, ${panel.combination}${panel.role === 'least contact' ? ', least contact' : ''}`;
 }
 
 /** Bars of the bearing-point forces of the most loaded column of each panel, inside to outside. */
@@ -264,35 +264,44 @@ export function bearingChartSpec(panels: BearingPanel[]): TopLevelSpec {
   const states: Array<BearingBar['state']> = ['in contact', 'lift-off', 'tension'];
   const positions = [...new Set(bars.map((bar) => bar.position))];
   const titles = panels.map(bearingPanelTitle);
+  // Room above the tallest bar (and below the deepest) for its value.
+  const top = Math.max(0, ...bars.map((bar) => bar.force));
+  const bottom = Math.min(0, ...bars.map((bar) => bar.force));
+  const domain = [bottom * 1.2, Math.max(top * 1.18, 1e-3)];
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     config: chartConfig,
     data: { values: bars },
-    facet: { field: 'panel', type: 'nominal', title: null, sort: titles, header: { labelFontSize: 9, labelFontWeight: 'bold', labelLimit: 240 } },
+    facet: { field: 'panel', type: 'nominal', title: null, sort: titles, header: { labelFontSize: 8.5, labelFontWeight: 'bold', labelLimit: 0 } },
     columns: 2,
     spacing: { column: 16, row: 10 },
     resolve: { scale: { y: 'shared' } },
     spec: {
-      width: 190,
+      width: 200,
       height: 110,
       layer: [
         {
           mark: { type: 'bar', width: 16 },
           encoding: {
             x: { field: 'position', type: 'ordinal', sort: positions, title: 'Bearing point across the flange, inside to outside', axis: { labelAngle: 0 } },
-            y: { field: 'force', type: 'quantitative', title: 'Force, compression + [kN]' },
+            y: { field: 'force', type: 'quantitative', title: 'Force, compression + [kN]', scale: { domain, nice: false } },
             color: { field: 'state', type: 'nominal', title: 'Bearing point', scale: { domain: states, range: states.map((state) => BEARING_COLOURS[state]) } },
           },
         },
         { mark: { type: 'rule', color: '#5d6d7e', strokeWidth: 0.6 }, encoding: { y: { datum: 0, type: 'quantitative' } } },
-        {
-          mark: { type: 'text', dy: -5, fontSize: 7.5, baseline: 'bottom' },
+        // Values above a pressing bar, below a pulling one.
+        ...[
+          { filter: 'datum.force >= 0', dy: -3, baseline: 'bottom' as const },
+          { filter: 'datum.force < 0', dy: 3, baseline: 'top' as const },
+        ].map((side) => ({
+          transform: [{ filter: side.filter }],
+          mark: { type: 'text' as const, dy: side.dy, fontSize: 7.5, baseline: side.baseline },
           encoding: {
-            x: { field: 'position', type: 'ordinal', sort: positions },
-            y: { field: 'force', type: 'quantitative' },
-            text: { field: 'text', type: 'nominal' },
+            x: { field: 'position', type: 'ordinal' as const, sort: positions },
+            y: { field: 'force', type: 'quantitative' as const },
+            text: { field: 'text', type: 'nominal' as const },
           },
-        },
+        })),
       ],
     },
   };

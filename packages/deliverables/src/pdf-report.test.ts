@@ -8,7 +8,8 @@ import { extractText, getMeta } from 'unpdf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DesignResult } from '@binsupport/design';
 import { renderDesignPdf, REPORT_STANDING } from './pdf-report.js';
-import { formatNumber, formatUtilisation } from './units.js';
+import { formatForce, formatKilo, formatNumber, formatUtilisation } from './units.js';
+import { bearingPanels } from './report-data.js';
 import { demoDesignResult } from './test-support/demo-result.js';
 
 const run = promisify(execFile);
@@ -61,6 +62,44 @@ describe('design.pdf', () => {
       expect(trace).toMatch(new RegExp(`^Member ${member.id}: .*?Governing utilisation ${utilisation.replace('.', '\\.')} Check ${member.governing.title.replace(/[()+]/g, '\\$&')}`));
       expect(trace.slice(0, 600)).toContain(`Clause ${member.governing.clause}`);
     }
+  });
+
+  it('states the lesson of every scenario beside its utilisation and tension flag', () => {
+    const all = pages.join(' ');
+    for (const scenario of result.scenarios) {
+      expect(all).toContain(scenario.lesson);
+    }
+    const bonded = result.scenarios.find((s) => s.id === 'bonded');
+    expect(bonded?.needsTension).toBe(true);
+    expect(all).toContain(`needs ${formatKilo((bonded?.maxBearingTension ?? 0) / 1000)} kN of tension a plain bearing cannot give`);
+  });
+
+  it('draws the plan of the layout with each member at its governing position', () => {
+    const all = pages.join(' ');
+    expect(all).toContain('Figure 2.1. Plan of the support layout seen from above');
+    expect(all).toContain(`columns C1 to C${result.girder.columns} at 45.0° spacing from +X, counter-clockwise`);
+    for (const label of ['C1', 'C3', 'C8']) expect(all).toMatch(new RegExp(`\\b${label}\\b`));
+    for (const member of result.members) {
+      expect(all).toContain(`${member.id} ${formatUtilisation(member.utilisation)}`);
+    }
+  });
+
+  it('reports the bearing contact of each scenario with bearings, flagging tension', () => {
+    const all = pages.join(' ');
+    expect(all).toContain('Bearing contact at the most loaded column');
+    const panels = bearingPanels(result);
+    expect(panels).toHaveLength(2);
+    for (const panel of panels) {
+      const percent = `${Math.round(panel.bearings.contactFraction * 100)} %`;
+      expect(all).toContain(`(${panel.scenario.id}), governing combination ${panel.combination}: ${percent} of the bearing points are in contact`);
+      expect(all).toContain(`is ${formatForce(panel.bearings.maxCompression)}.`);
+    }
+    const contact = panels.find((p) => p.scenario.id === 'contact');
+    const lifted = contact?.bearings.mostLoadedColumn.forces.filter((f) => f === 0).length ?? 0;
+    expect(lifted).toBeGreaterThan(0);
+    expect(all).toContain(`lift${lifted === 1 ? 's' : ''} off (zero bars)`);
+    const bonded = panels.find((p) => p.scenario.id === 'bonded');
+    expect(all).toContain(`TENSION of up to ${formatForce(bonded?.bearings.maxTension ?? 0)} in one point: not available from a real bearing`);
   });
 
   it('carries the title block and the cautions on page 1', () => {

@@ -272,7 +272,7 @@ function planFigure(result: DesignResult): PdfNode {
           headerRows: 1,
           widths: [36, 48, 44, '*', 56, 110, 32],
           body: [
-            [headerCell('Member'), headerCell('Section'), headerCell('Utilisation', 'right'), headerCell('Governing check'), headerCell('Combination'), headerCell('Position'), headerCell('θ', 'right')],
+          [headerCell('Member'), headerCell('Section'), headerCell('Utilisation', 'right'), headerCell('Governing check'), headerCell('Combination'), headerCell('Position'), headerCell('θ', 'right')],
             ...rows,
           ],
           dontBreakRows: true,
@@ -555,24 +555,24 @@ function percent(fraction: number): string {
   return `${Math.round(fraction * 100)} %`;
 }
 
-/** The sentence under a bearing panel: contact, peak compression, tension flagged, least contact. */
+/** The sentence under a bearing panel: contact, peak compression, lift-off, tension flagged. */
 export function bearingSentence(panel: BearingPanel): string {
-  const { bearings } = panel;
+  const { bearings, scenario } = panel;
   const forces = bearings.mostLoadedColumn.forces;
   const lifted = forces.filter((force) => force === 0).length;
   const pulling = forces.filter((force) => force < 0).length;
   const pressing = forces.length - lifted - pulling;
   const state = [`${pressing} of ${forces.length} points press`, ...(lifted > 0 ? [`${lifted} lift${lifted === 1 ? 's' : ''} off (zero bars)`] : []), ...(pulling > 0 ? [`${pulling} pull${pulling === 1 ? 's' : ''} (bars below zero)`] : [])];
+  const which = panel.role === 'governing' ? `governing combination ${panel.combination}` : `${panel.combination}, the combination with the least contact`;
   const parts = [
-    `${panel.scenario.title} (${panel.scenario.id}), governing combination ${panel.combination}: ` +
-      `${percent(bearings.contactFraction)} of the bearing points are in contact; the largest compression in one point is ${formatForce(bearings.maxCompression)}.`,
+    `${scenario.title} (${scenario.id}), ${which}: ${percent(bearings.contactFraction)} of the bearing points are in contact; ` +
+      `the largest compression in any one point (any column) is ${formatForce(bearings.maxCompression)}.`,
     `At ${bearings.mostLoadedColumn.group} ${state.length === 1 ? state[0] : `${state.slice(0, -1).join(', ')} and ${state[state.length - 1]}`}.`,
   ];
   if (bearings.maxTension > 0) {
     parts.push(`TENSION of up to ${formatForce(bearings.maxTension)} in one point: not available from a real bearing, which can only push; the scenario rests on it.`);
-  }
-  if (panel.leastContact !== undefined) {
-    parts.push(`The least contact of the scenario is ${percent(panel.leastContact.contactFraction)} of the points, under ${panel.leastContact.combination}.`);
+  } else if (panel.role === 'governing' && scenario.needsTension === true) {
+    parts.push(`In another combination the scenario needs TENSION of up to ${formatForce(scenario.maxBearingTension ?? 0)} in one point: not available from a real bearing, which can only push.`);
   }
   return parts.join(' ');
 }
@@ -587,15 +587,15 @@ async function bearingSection(result: DesignResult, figure: number): Promise<Pdf
         figureHeading(`5.${figure} Bearing contact at the most loaded column`),
         paragraph(
           'Forces in the bearing points across the bottom flange of the most loaded column cap, from the inner flange edge to the outer, ' +
-            'for the combination that governs each scenario with bearing points. A zero bar is a point that has lifted off; a bar below zero ' +
-            'is a point pulling on the flange.',
+            'for the combination that governs each scenario with bearing points and, where another combination leaves fewer points in contact, ' +
+            'for that one too. A zero bar is a point that has lifted off; a bar below zero is a point pulling on the flange.',
         ),
         svgNode(svg, Math.min(contentWidth, 440)),
         caption(`Figure 5.${figure}. ${panels.map(bearingPanelTitle).join('; ')}. Forces in kN, compression positive.`),
       ],
       unbreakable: true,
     },
-    { ul: panels.map((panel): PdfContent => ({ text: bearingSentence(panel), style: 'body', ...(panel.bearings.maxTension > 0 ? { color: colours.infeasible } : {}) })) },
+    { ul: panels.map((panel): PdfContent => ({ text: bearingSentence(panel), style: 'body', alignment: 'left', ...(panel.bearings.maxTension > 0 || (panel.role === 'governing' && panel.scenario.needsTension === true) ? { color: colours.infeasible } : {}) })) },
   ];
 }
 
@@ -736,17 +736,23 @@ function memberTrace(result: DesignResult, member: MemberResult, index: number):
   const expression = combinationExpression(result, governing.combination);
   const rows: UtilisationRow[] = result.utilisations.filter((row) => row.member === member.id);
   return [
-    subheading(`7.${index} Member ${member.id}: ${member.section}, ${member.grade}`),
-    keyValueTable([
-      ['Member', `${member.id}, ${member.description}`],
-      ['Section and grade', `${member.section}, ${member.grade}, ${formatNumber(member.massPerLength)} kg/m, ${formatNumber(member.length)} m`],
-      ['Governing utilisation', utilisationCell(member.utilisation, 'left')],
-      ['Check', `${governing.title} (${governing.check})`],
-      ['Clause', governing.clause],
-      ['Combination', expression === undefined ? governing.combination : `${governing.combination}: ${expression}`],
-      ['Scenario', scenario === undefined ? governing.scenario : `${scenario.title}${scenario.credible ? '' : ' (comparison only)'}`],
-      ['Position', positionText(governing.position)],
-    ]),
+    // The heading and the member's summary are kept together on one page.
+    {
+      stack: [
+        figureHeading(`7.${index} Member ${member.id}: ${member.section}, ${member.grade}`),
+        keyValueTable([
+          ['Member', `${member.id}, ${member.description}`],
+          ['Section and grade', `${member.section}, ${member.grade}, ${formatNumber(member.massPerLength)} kg/m, ${formatNumber(member.length)} m`],
+          ['Governing utilisation', utilisationCell(member.utilisation, 'left')],
+          ['Check', `${governing.title} (${governing.check})`],
+          ['Clause', governing.clause],
+          ['Combination', expression === undefined ? governing.combination : `${governing.combination}: ${expression}`],
+          ['Scenario', scenario === undefined ? governing.scenario : `${scenario.title}${scenario.credible ? '' : ' (comparison only)'}`],
+          ['Position', positionText(governing.position)],
+        ]),
+      ],
+      unbreakable: true,
+    },
     {
       columns: [valuesTable('Formula inputs', governing.inputs), valuesTable('Intermediate values', governing.intermediate)],
       columnGap: 10,
@@ -759,7 +765,7 @@ function memberTrace(result: DesignResult, member: MemberResult, index: number):
       ? []
       : [
           table(
-            [headerCell('Check'), headerCell('Clause'), headerCell('Combination'), headerCell('Scenario'), headerCell('Position'), headerCell('Utilisation', 'right')],
+          [headerCell('Check'), headerCell('Clause'), headerCell('Combination'), headerCell('Scenario'), headerCell('Position'), headerCell('Utilisation', 'right')],
             rows.map((row) => [
               { text: row.check, style: 'mono' },
               row.clause,
@@ -770,7 +776,7 @@ function memberTrace(result: DesignResult, member: MemberResult, index: number):
                 : { text: [`${row.position.description} (θ = ${formatAngle(row.position.angle)}). `, { text: row.note, italics: true }] },
               utilisationCell(row.utilisation),
             ]),
-            [80, 70, 44, '*', 110, 44],
+          [80, 70, 44, '*', 110, 44],
           ),
         ]),
   ];

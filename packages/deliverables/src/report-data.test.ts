@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { equilibrium, issueDate, PLACEHOLDER_DATE, scenarioEnvelopes, tonnageBySection, utilisationBand } from './report-data.js';
+import { bearingPanels, columnAngles, equilibrium, governingCombinationOf, issueDate, PLACEHOLDER_DATE, scenarioEnvelopes, tonnageBySection, utilisationBand } from './report-data.js';
 import { demoDesignResult } from './test-support/demo-result.js';
 
 describe('issueDate', () => {
@@ -73,5 +73,34 @@ describe('utilisationBand', () => {
     expect(utilisationBand(0.9001)).toBe('near limit');
     expect(utilisationBand(1.0)).toBe('near limit');
     expect(utilisationBand(1.0001)).toBe('exceeded');
+  });
+});
+
+describe('bearing panels', () => {
+  it('take the combination of the highest utilisation of a scenario in the envelope', () => {
+    const result = demoDesignResult();
+    const rows = result.utilisations.filter((row) => row.scenario === 'contact' && row.utilisation !== null);
+    const top = rows.reduce((a, b) => ((b.utilisation ?? 0) > (a.utilisation ?? 0) ? b : a));
+    expect(governingCombinationOf(result, 'contact')).toBe(top.combination);
+  });
+
+  it('take the combination that governs the design for a scenario outside the envelope', () => {
+    const result = demoDesignResult();
+    const governing = result.members.reduce((a, b) => ((b.utilisation ?? 0) > (a.utilisation ?? 0) ? b : a));
+    expect(governingCombinationOf(result, 'bonded')).toBe(governing.governing.combination);
+  });
+
+  it('skip scenarios without bearing points and add the combination with the least contact', () => {
+    const result = demoDesignResult();
+    expect(bearingPanels(result).map((p) => p.scenario.id)).toEqual(['contact', 'bonded']);
+    const sls = result.analyses.find((a) => a.scenario === 'contact' && a.combination === 'SLS-1');
+    if (sls?.bearings === undefined) throw new Error('fixture has no bearings');
+    sls.bearings.contactFraction = 0.2;
+    const panels = bearingPanels(result).filter((p) => p.scenario.id === 'contact');
+    expect(panels.map((p) => [p.role, p.combination])).toEqual([['governing', 'ULS-2'], ['least contact', 'SLS-1']]);
+  });
+
+  it('place column C(j+1) at 2 pi j / n', () => {
+    expect(columnAngles(4)).toEqual([0, Math.PI / 2, Math.PI, (3 * Math.PI) / 2]);
   });
 });

@@ -154,11 +154,10 @@ export function utilisationBand(utilisation: number | null): UtilisationBand {
 /** The bearing state of one analysis, picked to show how a scenario bears on the column caps. */
 export interface BearingPanel {
   scenario: ScenarioSummary;
-  /** The combination shown: the one that governs the scenario (see bearingPanels). */
+  /** 'governing': the combination that governs the scenario; 'least contact': the one with the fewest points in contact. */
+  role: 'governing' | 'least contact';
   combination: string;
   bearings: NonNullable<AnalysisSummary['bearings']>;
-  /** The analysis of the scenario with the least contact, when it differs from the one shown. */
-  leastContact?: { combination: string; contactFraction: number };
 }
 
 /**
@@ -181,7 +180,10 @@ export function governingCombinationOf(result: DesignResult, scenarioId: string)
   return governing?.combination;
 }
 
-/** For each scenario with bearing points: the bearing state under its governing combination. */
+/**
+ * For each scenario with bearing points: the bearing state under its governing combination, and,
+ * when another combination leaves fewer points in contact, that one too (where lift-off shows).
+ */
 export function bearingPanels(result: DesignResult): BearingPanel[] {
   const panels: BearingPanel[] = [];
   for (const scenario of result.scenarios) {
@@ -189,12 +191,12 @@ export function bearingPanels(result: DesignResult): BearingPanel[] {
     const combination = governingCombinationOf(result, scenario.id);
     const shown = own.find((a) => a.combination === combination);
     if (shown?.bearings === undefined) continue;
-    const least = own.reduce<AnalysisSummary | undefined>((low, a) => (low === undefined || (a.bearings?.contactFraction ?? 1) < (low.bearings?.contactFraction ?? 1) ? a : low), undefined);
-    const panel: BearingPanel = { scenario, combination: shown.combination, bearings: shown.bearings };
-    if (least?.bearings !== undefined && least.bearings.contactFraction < shown.bearings.contactFraction) {
-      panel.leastContact = { combination: least.combination, contactFraction: least.bearings.contactFraction };
+    panels.push({ scenario, role: 'governing', combination: shown.combination, bearings: shown.bearings });
+    let least: AnalysisSummary | undefined;
+    for (const analysis of own) {
+      if ((analysis.bearings?.contactFraction ?? 1) < (least?.bearings?.contactFraction ?? shown.bearings.contactFraction)) least = analysis;
     }
-    panels.push(panel);
+    if (least?.bearings !== undefined) panels.push({ scenario, role: 'least contact', combination: least.combination, bearings: least.bearings });
   }
   return panels;
 }

@@ -80,6 +80,7 @@ describe('design.xlsx', () => {
       expect(row.getCell(12).value).toBe(member.governing.scenario);
       expect(row.getCell(13).value).toBeCloseTo((member.governing.position.angle * 180) / Math.PI, 9);
       expect(row.getCell(14).value).toBe(member.governing.position.description);
+      expect(row.getCell(15).value).toBe(member.governing.title);
     });
   });
 

@@ -62,7 +62,7 @@ export const fieldNotes: Record<string, FieldNote> = {
   'solid.wallFrictionCoefficient': { unit: '', note: 'Overrides the mean wall friction coefficient mu_m.', defaultText: 'from the solids table' },
   'solid.lateralPressureRatio': { unit: '', note: 'Overrides the mean lateral pressure ratio K_m.', defaultText: 'from the solids table' },
   'support.type': { unit: '', note: 'The girder layout.' },
-  'support.columns': { unit: '', note: 'Ring on columns: number of equally spaced columns; column C1 stands at 0 degrees (+X). Leave empty for a ring on a slab.' },
+  'support.columns': { unit: '', note: 'Ring on columns: number of equally spaced columns; column C1 stands at 0 degrees (+X). Leave empty for a ring on a slab.', defaultText: 'required for ring-on-columns' },
   'support.segments': { unit: '', note: 'Ring on a slab: straight segments of the whole ring in the girder model.' },
   'support.bearingModulus': { unit: 'MN/m3', note: 'Ring on a slab: bearing modulus of the slab under the bottom flange.' },
   'support.anchorCapacity': { unit: 'kN/m', note: 'Holding-down capacity of the anchors per metre of girder (0: no anchors).' },
@@ -130,6 +130,8 @@ interface Leaf {
   schema: z.ZodType;
   defaultValue?: unknown;
   required: boolean;
+  /** Required within its table, which may itself be optional (roof.deadLoad, equipment[].force). */
+  requiredInTable: boolean;
 }
 
 /** Every leaf input of an object schema; `required` is false when a parent table is optional. */
@@ -142,7 +144,7 @@ function leavesOf(schema: z.ZodType, prefix: string, parentRequired: boolean): L
   if (inner instanceof z.ZodArray && unwrap(inner.element as z.ZodType).inner instanceof z.ZodObject) {
     return leavesOf(inner.element as z.ZodType, `${prefix}[]`, false);
   }
-  return [{ path: prefix, schema: inner, required, ...(defaultValue === undefined ? {} : { defaultValue }) }];
+  return [{ path: prefix, schema: inner, required, requiredInTable: !optional, ...(defaultValue === undefined ? {} : { defaultValue }) }];
 }
 
 /** Paths of every leaf input of the schema (equipment fields under `equipment[]`). */
@@ -152,6 +154,8 @@ export function schemaLeafPaths(): string[] {
 
 function describeLeaf(leaf: Leaf): Pick<SpecSheetField, 'kind' | 'min' | 'max' | 'maxLength' | 'choices'> {
   const schema = leaf.schema;
+  // solid.name is text in the schema (checked against the solids table when resolved), so its
+  // drop-down comes from the table itself.
   if (leaf.path === 'solid.name') {
     return { kind: 'choice', choices: storedSolidTable().map((row) => row.id) };
   }
@@ -191,12 +195,15 @@ export function specSheetFields(): SpecSheetField[] {
       const notes = fieldNotes[leaf.path];
       if (notes === undefined) throw new Error(`spec sheet: no unit and note for the input ${leaf.path}`);
       const described = describeLeaf(leaf);
+      const required = leaf.required && leaf.defaultValue === undefined && notes.defaultText === undefined;
+      const table = leaf.path.slice(0, leaf.path.lastIndexOf('.'));
+      const conditional = !required && leaf.requiredInTable && leaf.defaultValue === undefined && notes.defaultText === undefined;
       return {
         path: leaf.path,
         ...described,
         unit: notes.unit,
-        defaultText: notes.defaultText ?? defaultAsText(leaf.defaultValue),
-        required: leaf.required && leaf.defaultValue === undefined && notes.defaultText === undefined,
+        defaultText: notes.defaultText ?? (conditional ? (table.endsWith('[]') ? 'required for each item' : `required for ${table}`) : defaultAsText(leaf.defaultValue)),
+        required,
         note: notes.note,
       };
     });

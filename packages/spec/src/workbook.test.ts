@@ -126,7 +126,9 @@ describe('spec-sheet fields', () => {
     expect(byPath.get('support.grade')).toMatchObject({ kind: 'choice', choices: ['S235', 'S275', 'S355', 'S460'], defaultText: 'S355', required: false });
     expect(byPath.get('support.credibleScenarios')).toMatchObject({ kind: 'list of choices', defaultText: 'the contact scenario of the support type' });
     expect(byPath.get('solid.name')?.choices).toEqual(storedSolidTable().map((row) => row.id));
-    expect(byPath.get('roof.deadLoad')).toMatchObject({ unit: 'kN/m2', required: false });
+    expect(byPath.get('roof.deadLoad')).toMatchObject({ unit: 'kN/m2', required: false, defaultText: 'required for roof' });
+    expect(byPath.get('roof.imposedLoad')).toMatchObject({ required: false, defaultText: '0' });
+    expect(byPath.get('equipment[].force')).toMatchObject({ unit: 'kN', defaultText: 'required for each item' });
   });
 });
 

@@ -241,8 +241,9 @@ async function loadWorkbook(bytes: Uint8Array, source: string): Promise<Workbook
     const copy = new Uint8Array(bytes.byteLength);
     copy.set(bytes);
     await workbook.xlsx.load(copy.buffer);
-  } catch (error) {
-    fail('PARSE_ERROR', source, `${source} is not a readable .xlsx workbook (${(error as Error).message.split('\n')[0]}); save the spec sheet from Excel or LibreOffice as .xlsx`);
+  } catch {
+    // The reader's own message names its zip library and a web page; the engineer needs only this.
+    fail('PARSE_ERROR', source, `${source} is not a readable .xlsx workbook (an .xlsx file is a zip archive of the sheets; this one is not, or is damaged); save the spec sheet from Excel or LibreOffice as .xlsx`);
   }
   return workbook;
 }
