@@ -143,7 +143,7 @@ describe('spec-sheet workbook round trip', () => {
     await workbook.xlsx.readFile(template);
     const sheet = workbook.getWorksheet('Spec');
     expect(sheet).toBeDefined();
-    const header = (sheet?.getRow(1).values as unknown[]).map((cell) => String(cell ?? '').toLowerCase());
+    const header = Array.from(sheet?.getRow(1).values as unknown[], (cell) => String(cell ?? '').toLowerCase());
     const pathColumn = header.findIndex((cell) => cell.startsWith('path') || cell.startsWith('input'));
     const valueColumn = header.findIndex((cell) => cell.startsWith('value'));
     sheet?.eachRow((row, index) => {

@@ -1,6 +1,6 @@
 import { readFile, stat } from 'node:fs/promises';
 import { extname } from 'node:path';
-import { parse as parseYaml, YAMLParseError } from 'yaml';
+import { parseDocument, YAMLError } from 'yaml';
 import { SpecError } from './errors.js';
 import { normaliseSpec, type BinSpec } from './spec.js';
 import { parseGirderModelFile, type GirderModelFile } from './girder-model.js';
@@ -28,11 +28,17 @@ export function parseSpecText(textContent: string, format: Exclude<SpecFormat, '
       throw new SpecError('PARSE_ERROR', [{ path: source, message: `${source} is not valid JSON: ${(error as Error).message}` }]);
     }
   }
+  // Plain YAML 1.2 core schema: no custom tags, no merge keys, a bounded alias count. A warning
+  // (an unknown tag, for instance) is refused like an error, rather than printed and ignored.
+  const document = parseDocument(textContent, { schema: 'core', merge: false, uniqueKeys: true, prettyErrors: false });
+  const problem = document.errors[0] ?? document.warnings[0];
+  if (problem) {
+    throw new SpecError('PARSE_ERROR', [{ path: source, message: `${source} is not valid YAML: ${problem.message.split('\n')[0]}` }]);
+  }
   try {
-    // Plain YAML 1.2 core schema: no custom tags, no merge keys, a bounded alias count.
-    return parseYaml(textContent, { schema: 'core', merge: false, maxAliasCount: 100, uniqueKeys: true }) as unknown;
+    return document.toJS({ maxAliasCount: 100 }) as unknown;
   } catch (error) {
-    const detail = error instanceof YAMLParseError ? error.message.split('\n')[0] : (error as Error).message;
+    const detail = error instanceof YAMLError ? error.message.split('\n')[0] : (error as Error).message;
     throw new SpecError('PARSE_ERROR', [{ path: source, message: `${source} is not valid YAML: ${detail}` }]);
   }
 }

@@ -144,3 +144,14 @@ describe('support types', () => {
     expect(errorOf({ ...minimal, support: { type: 'ring-on-slab', credibleScenarios: ['slab-anchored'] } }).path).toBe('support.anchorCapacity');
   });
 });
+
+describe('YAML that is not plain data', () => {
+  it('refuses custom tags instead of warning and going on', () => {
+    expect(() => parseSpecText('project: !custom {name: x}\n', 'yaml', 'tag.yaml')).toThrowError(/tag.yaml is not valid YAML/);
+  });
+
+  it('refuses an alias bomb (billion laughs) by its alias count', () => {
+    const bomb = ['a: &a [x, x, x, x, x, x, x, x, x, x]', ...Array.from({ length: 8 }, (_, i) => `${String.fromCharCode(98 + i)}: &${String.fromCharCode(98 + i)} [${Array(10).fill(`*${String.fromCharCode(97 + i)}`).join(', ')}]`)].join('\n');
+    expect(() => parseSpecText(bomb, 'yaml', 'bomb.yaml')).toThrowError(/bomb.yaml is not valid YAML/);
+  });
+});
