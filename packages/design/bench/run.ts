@@ -14,7 +14,7 @@ for (let i = 0; i < runs; i++) {
   const { result } = await designFromSpec(spec);
   times.push(performance.now() - start);
   rounds = result.optimisation.iterations.length;
-  sections = result.members.map((member) => `${member.id} ${member.section}`).join(', ');
+  sections = `${result.members.map((member) => `${member.id} ${member.section} ${member.grade}`).join(', ')}; steel ${result.totals.steelMass.toFixed(0)} kg; ${result.utilisations.length} utilisation rows`;
 }
 times.sort((a, b) => a - b);
 const median = times[Math.floor(times.length / 2)] ?? Number.NaN;

@@ -1,11 +1,13 @@
 import { analyseAll, GirderError, type AnalysisResult, type GirderModel, type SectionStiffness, type Station } from '@binsupport/girder';
 import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
-import { solveSelection } from '@binsupport/optimiser';
+import { solveSelection, tieTolerance, type SelectionCandidate, type SelectionGroup, type SelectionProblem } from '@binsupport/optimiser';
 import type { BinSpec } from '@binsupport/spec';
 import { loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
 import { DesignError } from './errors.js';
-import { envelopeChecks, exceedsAnywhere, governingEnvelope, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
+import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
+import { columnChecks, columnDemands, type ColumnDemand } from './columns.js';
+import { DEFAULT_SERVICEABILITY, displacementChecks, forceChecks, settlementOf, type AnalysedCase, type ServiceabilityLimits } from './girder-checks.js';
 import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
 import { SCENARIOS, scenarioSummary, type ScenarioDefinition } from './scenarios.js';
 import { girderModelDocument, type GirderModelDocument } from './model-file.js';
@@ -14,7 +16,7 @@ import { TOOL_NAME, TOOL_VERSION } from './version.js';
 export const CAUTIONS = [
   'This is a first-pass design produced by software. It must be checked and verified by a qualified structural engineer before it is used for construction.',
   'Local building codes, national annexes and licensed engineering practice govern over every value and assumption in this document.',
-  'The analysis covers only the actions, support scenarios and checks listed in this report; connections, columns, foundations and the shell itself are outside its scope.',
+  'The analysis covers only the actions, support scenarios and checks listed in this report; connections, column bases, foundations and the shell itself are outside its scope, and the columns are checked as members only (pinned at the base, held at the top by bracing).',
 ];
 
 export interface DesignOptions {
@@ -23,6 +25,212 @@ export interface DesignOptions {
   maxIterations?: number;
   /** Stations per element at which internal forces are checked (ends included). */
   stationsPerElement?: number;
+  /** Deflection limit of the girder between columns as span / ratio (default 500, common practice). */
+  deflectionLimitRatio?: number;
+  /** Twist limit of the girder, rad (default 0.01, common practice). */
+  twistLimit?: number;
+  /** Steel grades the optimiser may choose from, one for all member groups (default [support.grade]). */
+  grades?: string[];
+  /** Price per kg of each grade (default DEFAULT_PRICE_PER_KG, relative to S235; a grade not listed costs 1). */
+  pricePerKg?: Record<string, number>;
+  /** Cost added for each distinct (section, grade) pair used, in the units of the price (default 0). */
+  costPerDistinctSection?: number;
+  /** At most this many distinct (section, grade) pairs over the girder and the columns (default: no cap). */
+  maxDistinctSections?: number;
+  /** Rolled series of the column candidates of a ring on columns (default ['HE B']). */
+  columnSeries?: SteelSection['series'][];
+}
+
+/** A candidate of a member group: a section in a grade, and its utilisation under the forces used. */
+interface CandidateOption {
+  section: SteelSection;
+  grade: SteelGrade;
+  utilisation: number;
+}
+
+/** The best choice found under one girder's own forces. */
+interface Choice {
+  girder: SteelSection;
+  grade: SteelGrade;
+  column?: SteelSection;
+  objective: number;
+}
+
+/**
+ * The candidates, the cost model and the memoised checks of the integer program: girder candidates
+ * (section x grade) under an analysed girder's forces, column candidates (section x grade) under the
+ * column forces of that analysis, one grade for all groups, a distinct-section cap and cost.
+ */
+function selectionSetup(context: DesignContext, options: DesignOptions, girderLength: number) {
+  const { spec, layout } = context;
+  const gradeNames = options.grades ?? [spec.support.grade];
+  if (gradeNames.length === 0) throw new DesignError('BAD_INPUT', 'options.grades must name at least one steel grade', 'options.grades');
+  const grades = [...new Set(gradeNames)].map((name, i) => {
+    try {
+      return steelGrade(name);
+    } catch (error) {
+      if (error instanceof SteelError) throw new DesignError('BAD_INPUT', `options.grades[${i}]: ${error.message}`, `options.grades[${i}]`);
+      throw error;
+    }
+  });
+  const maxDistinctSections = options.maxDistinctSections;
+  if (maxDistinctSections !== undefined && !(Number.isInteger(maxDistinctSections) && maxDistinctSections >= 1)) {
+    throw new DesignError('BAD_INPUT', `options.maxDistinctSections must be a whole number of at least 1; got ${maxDistinctSections}`, 'options.maxDistinctSections');
+  }
+  const costPerDistinctSection = options.costPerDistinctSection ?? 0;
+  if (!(Number.isFinite(costPerDistinctSection) && costPerDistinctSection >= 0)) {
+    throw new DesignError('BAD_INPUT', `options.costPerDistinctSection must be zero or a positive number; got ${costPerDistinctSection}`, 'options.costPerDistinctSection');
+  }
+  const pricePerKg = Object.fromEntries(grades.map((grade) => [grade.name, options.pricePerKg?.[grade.name] ?? DEFAULT_PRICE_PER_KG[grade.name] ?? 1]));
+  for (const [name, price] of Object.entries(pricePerKg)) {
+    if (!(Number.isFinite(price) && price > 0)) throw new DesignError('BAD_INPUT', `options.pricePerKg.${name} must be a positive number; got ${price}`, `options.pricePerKg.${name}`);
+  }
+  const price = (grade: SteelGrade): number => pricePerKg[grade.name] ?? 1;
+  const hasColumns = layout.kind !== 'slab';
+  const columnSeries = new Set(options.columnSeries ?? DEFAULT_COLUMN_SERIES);
+  const columnCandidates = hasColumns
+    ? loadRolledSections()
+        .filter((section) => columnSeries.has(section.series))
+        .sort((a, b) => a.properties.massPerMetre - b.properties.massPerMetre || a.designation.localeCompare(b.designation))
+    : [];
+  if (hasColumns && columnCandidates.length === 0) throw new DesignError('BAD_INPUT', 'no column candidates in the chosen series', 'options.columnSeries');
+  const columnLength = layout.columns * spec.support.columnHeight;
+  const keysMatter = maxDistinctSections !== undefined || costPerDistinctSection > 0;
+  const costObjective = keysMatter || grades.some((grade) => price(grade) !== 1);
+  const keyOf = (section: SteelSection, grade: SteelGrade): string => `${section.designation} ${grade.name}`;
+  const gradeAttribute = (grade: SteelGrade): number => Math.round((grade.strengths[0]?.yieldStrength ?? 0) / 1e6);
+  const girderCost = (section: SteelSection, grade: SteelGrade): number => section.properties.massPerMetre * girderLength * price(grade);
+  const columnCost = (section: SteelSection, grade: SteelGrade): number => section.properties.massPerMetre * columnLength * price(grade);
+
+  const girderMemo = new Map<string, CheckEnvelope[]>();
+  const girderEnvelopes = (entry: SectionAnalysis, grade: SteelGrade): CheckEnvelope[] => {
+    if (grade.name === context.grade.name) return entry.envelopes;
+    const key = `${entry.section.designation}|${entry.scenarios.map((s) => s.analyses.length).join(',')}|${grade.name}`;
+    let envelopes = girderMemo.get(key);
+    if (!envelopes) {
+      envelopes = sectionEnvelopes(context, entry.section, grade, entry.scenarios);
+      girderMemo.set(key, envelopes);
+    }
+    return envelopes;
+  };
+  const demandMemo = new Map<SectionAnalysis, ColumnDemand[]>();
+  const demandsOf = (entry: SectionAnalysis): ColumnDemand[] => {
+    let demands = demandMemo.get(entry);
+    if (!demands) {
+      demands = governingDemands(columnDemands(context.loads, layout, casesOf(entry.scenarios, sizingCombinations(context.loads))));
+      demandMemo.set(entry, demands);
+    }
+    return demands;
+  };
+  const columnMemo = new Map<string, CheckEnvelope[]>();
+  const columnEnvelopes = (entry: SectionAnalysis, column: SteelSection, grade: SteelGrade): CheckEnvelope[] => {
+    const key = `${entry.section.designation}|${column.designation}|${grade.name}`;
+    let envelopes = columnMemo.get(key);
+    if (!envelopes) {
+      envelopes = columnChecks(column, grade, spec.support.columnHeight, demandsOf(entry));
+      columnMemo.set(key, envelopes);
+    }
+    return envelopes;
+  };
+  const columnUtilisation = (entry: SectionAnalysis, column: SteelSection, grade: SteelGrade): number => maxUtilisation(columnEnvelopes(entry, column, grade));
+  const girderUtilisation = (entry: SectionAnalysis, grade: SteelGrade): number => maxUtilisation(girderEnvelopes(entry, grade));
+
+  /** Column candidates under an analysis: lightest first per grade, the heavier ones dominated unless keys matter. */
+  const columnOptions = (entry: SectionAnalysis): CandidateOption[] => {
+    const list: CandidateOption[] = [];
+    for (const grade of grades) {
+      for (const section of columnCandidates) {
+        const utilisation = columnUtilisation(entry, section, grade);
+        list.push({ section, grade, utilisation });
+        if (utilisation <= 1 && !keysMatter) break;
+      }
+    }
+    return list;
+  };
+  const byId = new Map<string, CandidateOption>();
+  const toCandidates = (list: CandidateOption[], cost: (section: SteelSection, grade: SteelGrade) => number): SelectionCandidate[] =>
+    [...list]
+      .sort((a, b) => cost(a.section, a.grade) - cost(b.section, b.grade) || a.section.designation.localeCompare(b.section.designation) || a.grade.name.localeCompare(b.grade.name))
+      .map((option) => {
+        const id = keyOf(option.section, option.grade);
+        byId.set(id, option);
+        return { id, key: id, cost: cost(option.section, option.grade), feasible: option.utilisation <= 1, attributes: { grade: gradeAttribute(option.grade) } };
+      });
+  const problem = (girderOptions: CandidateOption[], columnOptionList: CandidateOption[]): SelectionProblem => {
+    const groups: SelectionGroup[] = [{ id: MEMBER_ID, candidates: toCandidates(girderOptions, girderCost) }];
+    if (hasColumns) groups.push({ id: COLUMN_MEMBER_ID, candidates: toCandidates(columnOptionList, columnCost) });
+    return {
+      groups,
+      ...(maxDistinctSections !== undefined ? { maxDistinctKeys: maxDistinctSections } : {}),
+      ...(costPerDistinctSection > 0 ? { distinctKeyCost: costPerDistinctSection } : {}),
+      ...(hasColumns && grades.length > 1 ? { sameAttributeGroups: [{ groups: [MEMBER_ID, COLUMN_MEMBER_ID], attribute: 'grade' }] } : {}),
+    };
+  };
+  /** The least-cost choice with each girder judged by its own forces (one integer program per girder). */
+  const bestOver = async (entries: SectionAnalysis[]): Promise<Choice | undefined> => {
+    let best: Choice | undefined;
+    for (const entry of entries) {
+      const girderOptions = grades.map((grade) => ({ section: entry.section, grade, utilisation: girderUtilisation(entry, grade) }));
+      if (!girderOptions.some((option) => option.utilisation <= 1)) continue;
+      const solved = await solveSelection(problem(girderOptions, hasColumns ? columnOptions(entry) : []));
+      if (solved.status === 'infeasible') continue;
+      const girder = byId.get(solved.choice[MEMBER_ID] ?? '');
+      const column = hasColumns ? byId.get(solved.choice[COLUMN_MEMBER_ID] ?? '') : undefined;
+      if (!girder) continue;
+      const better = !best || solved.objective < best.objective - tieTolerance(best.objective) || (Math.abs(solved.objective - best.objective) <= tieTolerance(best.objective) && entry.section.properties.massPerMetre < best.girder.properties.massPerMetre);
+      if (better) best = { girder: entry.section, grade: girder.grade, ...(column ? { column: column.section } : {}), objective: solved.objective };
+    }
+    return best;
+  };
+  const minPrice = Math.min(...grades.map(price));
+  const lightestColumn = columnCandidates[0];
+  return {
+    grades,
+    columnCandidates,
+    hasColumns,
+    keysMatter,
+    costObjective,
+    costSummary: { pricePerKg, costPerDistinctSection, maxDistinctSections: maxDistinctSections ?? null, grades: grades.map((grade) => grade.name) },
+    girderUtilisation,
+    girderEnvelopes,
+    columnUtilisation,
+    columnEnvelopes,
+    columnOptions,
+    problem,
+    option: (id: string | undefined): CandidateOption | undefined => byId.get(id ?? ''),
+    bestOver,
+    /** The least objective any choice with this girder can have. */
+    lowerBound: (section: SteelSection): number =>
+      section.properties.massPerMetre * girderLength * minPrice + (lightestColumn ? lightestColumn.properties.massPerMetre * columnLength * minPrice : 0) + costPerDistinctSection,
+    bestAttemptColumn: (entry: SectionAnalysis, grade: SteelGrade): SteelSection | undefined => {
+      if (!hasColumns) return undefined;
+      const ranked = columnCandidates.map((section) => ({ section, utilisation: columnUtilisation(entry, section, grade) }));
+      return (ranked.find((option) => option.utilisation <= 1) ?? [...ranked].sort((a, b) => a.utilisation - b.utilisation)[0])?.section;
+    },
+    objectiveOf: (members: Array<{ mass: number; key: string }>, grade: SteelGrade): number => members.reduce((sum, member) => sum + member.mass * price(grade), 0) + costPerDistinctSection * new Set(members.map((member) => member.key)).size,
+  };
+}
+
+/**
+ * The column demands that can govern: per (combination, scenario), those not dominated by another
+ * with at least the compression and at least the moment (every column check grows with both).
+ */
+function governingDemands(demands: ColumnDemand[]): ColumnDemand[] {
+  const groups = new Map<string, ColumnDemand[]>();
+  for (const demand of demands) {
+    const key = `${demand.combination}|${demand.scenario}`;
+    groups.set(key, [...(groups.get(key) ?? []), demand]);
+  }
+  const kept: ColumnDemand[] = [];
+  for (const list of groups.values()) {
+    kept.push(
+      ...list.filter(
+        (demand, i) =>
+          !list.some((other, j) => j !== i && other.compression >= demand.compression && Math.abs(other.moment) >= Math.abs(demand.moment) && (other.compression > demand.compression || Math.abs(other.moment) > Math.abs(demand.moment) || j < i)),
+      ),
+    );
+  }
+  return kept;
 }
 
 export interface DesignOutcome {
@@ -34,6 +242,17 @@ export interface DesignOutcome {
 export const familyToSeries: Record<BinSpec['support']['sectionFamilies'][number], SteelSection['series']> = { IPE: 'IPE', HEB: 'HE B' };
 
 const MEMBER_ID = 'RG';
+const COLUMN_MEMBER_ID = 'C';
+
+/**
+ * Default price per kg of steel by grade, relative to S235 (the objective is then in kg of S235
+ * equivalent). The order of the grade extras is common practice; the values are not a market quote:
+ * give DesignOptions.pricePerKg for a real comparison.
+ */
+export const DEFAULT_PRICE_PER_KG: Readonly<Record<string, number>> = Object.freeze({ S235: 1.0, S275: 1.03, S355: 1.06, S460: 1.15 });
+
+/** Default rolled series of the column candidates. */
+export const DEFAULT_COLUMN_SERIES: readonly SteelSection['series'][] = ['HE B'];
 const RELATIVE_EQUILIBRIUM_TOLERANCE = 1e-6;
 
 function stiffnessOf(section: SteelSection, grade: SteelGrade, density: number): SectionStiffness {
@@ -65,6 +284,7 @@ export interface DesignContext {
   grade: SteelGrade;
   column: { section: SteelSection; axialStiffness: number };
   stationsPerElement: number;
+  serviceability: ServiceabilityLimits;
 }
 
 export function loadsFor(spec: BinSpec): LoadSet {
@@ -105,6 +325,59 @@ export function sizingCombinations(loads: LoadSet): Set<string> {
   return new Set(loads.combinations.filter((combination) => combination.limitState === 'ULS' && combination.verification !== 'EQU').map((combination) => combination.name));
 }
 
+/** The serviceability combinations checked for deflection and twist: the characteristic ones (EN 1990 6.5.3 a). */
+export function serviceabilityCombinations(loads: LoadSet): Set<string> {
+  return new Set(loads.combinations.filter((combination) => combination.limitState === 'SLS' && combination.verification === 'SLS-characteristic').map((combination) => combination.name));
+}
+
+/** The combinations a section is checked under: the sizing ULS ones and the SLS characteristic ones. */
+export function designCombinations(loads: LoadSet): Set<string> {
+  return new Set([...sizingCombinations(loads), ...serviceabilityCombinations(loads)]);
+}
+
+/** Every analysed combination of the scenarios, with its model, restricted to the names given. */
+function casesOf(scenarios: ScenarioAnalysis[], names: Set<string>): AnalysedCase[] {
+  return scenarios.flatMap(({ scenario, model, analyses }) => analyses.filter((analysis) => names.has(analysis.combination)).map((analysis) => ({ scenario: scenario.id, model, analysis })));
+}
+
+/**
+ * The checks that hold for any candidate under the forces of analysed scenarios (the section need not
+ * be the one analysed): cross-section checks at every station, the web over the columns, the flange
+ * under the bearing, the ring under the hopper's pull, anchors. ULS sizing combinations only.
+ */
+export function forceEnvelopes(context: DesignContext, section: SteelSection, grade: SteelGrade, scenarios: ScenarioAnalysis[]): CheckEnvelope[] {
+  return [...envelopeChecks(section, grade, ulsStations(context, scenarios)), ...forceChecks(context, section, grade, casesOf(scenarios, sizingCombinations(context.loads)))];
+}
+
+/** All checks of the analysed section: the force checks and serviceability from its own displacements. */
+export function sectionEnvelopes(context: DesignContext, section: SteelSection, grade: SteelGrade, scenarios: ScenarioAnalysis[]): CheckEnvelope[] {
+  return [...forceEnvelopes(context, section, grade, scenarios), ...displacementChecks(context, casesOf(scenarios, serviceabilityCombinations(context.loads)))];
+}
+
+/**
+ * The largest utilisation of a candidate under the forces of an analysed section, cheapest checks
+ * first: the local and ring checks (a few per combination), then a station scan that stops at the
+ * first excess. A candidate rejected early gets the utilisation of the check that rejected it (or Infinity from the scan).
+ */
+function screenUnderForces(context: DesignContext, section: SteelSection, grade: SteelGrade, state: SectionAnalysis): number {
+  const local = maxUtilisation(forceChecks(context, section, grade, casesOf(state.scenarios, sizingCombinations(context.loads))));
+  if (!(local <= 1)) return local;
+  return Math.max(local, maxStationUtilisation(section, grade, state.uls));
+}
+
+/**
+ * Whether a section can pass under its own forces, judged from a few combinations: the least over the
+ * grades of its largest utilisation there (the fast scan: Infinity at the first excess). Used to skip
+ * a full analysis of a section that fails anyway.
+ */
+function screenSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string>, grades: SteelGrade[]): number {
+  const analysed = scenarios.map((scenario) => analyseScenario(context, section, scenario, only));
+  const state = { section, scenarios: analysed, uls: ulsStations(context, analysed), envelopes: [], utilisation: 0 };
+  const displacement = maxUtilisation(displacementChecks(context, casesOf(analysed, serviceabilityCombinations(context.loads))));
+  if (!(displacement <= 1)) return displacement;
+  return Math.max(displacement, Math.min(...grades.map((grade) => screenUnderForces(context, section, grade, state))));
+}
+
 /** Analyse one scenario under the combinations named in `only` (default: all of them). */
 export function analyseScenario(context: DesignContext, section: SteelSection, scenario: ScenarioDefinition, only?: Set<string>): ScenarioAnalysis {
   const { spec, loads, layout, grade } = context;
@@ -140,16 +413,16 @@ function ulsStations(context: DesignContext, scenarios: ScenarioAnalysis[]): Sta
   );
 }
 
-/** Analyse a section under the given scenarios and the sizing combinations (or only those named). */
-export function analyseSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string> = sizingCombinations(context.loads)): SectionAnalysis {
+/** Analyse a section under the given scenarios and the design combinations, ULS and SLS (or only those named). */
+export function analyseSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string> = designCombinations(context.loads)): SectionAnalysis {
   const analysed = scenarios.map((scenario) => analyseScenario(context, section, scenario, only));
   const uls = ulsStations(context, analysed);
-  const envelopes = envelopeChecks(section, context.grade, uls);
+  const envelopes = sectionEnvelopes(context, section, context.grade, analysed);
   return { section, scenarios: analysed, uls, envelopes, utilisation: maxUtilisation(envelopes) };
 }
 
 /** The design context of a spec: loads, layout, grade and the column's axial stiffness. */
-export function designContext(spec: BinSpec, stationsPerElement = 5): DesignContext {
+export function designContext(spec: BinSpec, stationsPerElement = 5, serviceability: Partial<ServiceabilityLimits> = {}): DesignContext {
   const grade = steelGrade(spec.support.grade);
   let columnSection: SteelSection;
   try {
@@ -166,6 +439,7 @@ export function designContext(spec: BinSpec, stationsPerElement = 5): DesignCont
     // Axial stiffness of the column, E A / H (the cap's bearing springs share it).
     column: { section: columnSection, axialStiffness: (grade.youngsModulus * columnSection.properties.area) / spec.support.columnHeight },
     stationsPerElement,
+    serviceability: { ...DEFAULT_SERVICEABILITY, ...serviceability },
   };
 }
 
@@ -224,8 +498,11 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   const progress = options.progress ?? (() => undefined);
   const maxIterations = options.maxIterations ?? 8;
   const stationsPerElement = options.stationsPerElement ?? 3;
-  const context = designContext(spec, stationsPerElement);
-  const { grade, loads, layout } = context;
+  const context = designContext(spec, stationsPerElement, {
+    ...(options.deflectionLimitRatio !== undefined ? { deflectionLimitRatio: options.deflectionLimitRatio } : {}),
+    ...(options.twistLimit !== undefined ? { twistLimit: options.twistLimit } : {}),
+  });
+  const { loads, layout } = context;
   const series = new Set(spec.support.sectionFamilies.map((family) => familyToSeries[family]));
   const candidates = loadRolledSections()
     .filter((section) => series.has(section.series))
@@ -240,7 +517,9 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   const girderLength = 2 * Math.PI * layout.radius;
 
   // Start from the heaviest candidate: its self weight bounds the others', so the first forces are on
-  // the safe side; each round re-analyses the chosen section until the choice repeats.
+  // the safe side; each round re-analyses the chosen girder section until the choice repeats.
+  const selection = selectionSetup(context, options, girderLength);
+  const { grades, columnCandidates, hasColumns } = selection;
   const analysed = new Map<string, SectionAnalysis>();
   const analyseCached = (section: SteelSection) => {
     let entry = analysed.get(section.designation);
@@ -257,78 +536,131 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   let feasibleCount = 0;
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
     const state = analyseCached(current);
-    // Candidates are checked lightest first under the current forces. With one member group and
-    // mass as the objective, a heavier candidate can never be chosen once a lighter one passes, so
-    // the heavier ones are pruned as dominated before the integer program (they stay unevaluated).
-    const evaluated: Array<{ section: SteelSection; utilisation: number }> = [];
-    for (const section of candidates) {
-      if (exceedsAnywhere(section, grade, state.uls)) {
-        evaluated.push({ section, utilisation: Infinity });
-        continue;
+    // Girder candidates are checked lightest first, per grade, under the current forces (a
+    // candidate already analysed is judged by its own forces and displacements). Heavier ones are
+    // dominated by the first that passes and stay unevaluated, except those that could share their
+    // section with the columns (under a distinct-section cap), checked until one passes as both.
+    const girderOptions: CandidateOption[] = [];
+    for (const grade of grades) {
+      let passing: SteelSection | undefined;
+      for (const section of candidates) {
+        const shareable = hasColumns && columnCandidates.some((column) => column.designation === section.designation);
+        if (passing && !shareable) continue;
+        const own = analysed.get(section.designation);
+        const utilisation = own ? selection.girderUtilisation(own, grade) : screenUnderForces(context, section, grade, state);
+        girderOptions.push({ section, grade, utilisation });
+        if (!(utilisation <= 1)) continue;
+        passing ??= section;
+        if (!selection.keysMatter) break;
+        if (shareable && selection.columnUtilisation(state, section, grade) <= 1) break;
       }
-      evaluated.push({ section, utilisation: maxUtilisation(envelopeChecks(section, grade, state.uls)) });
-      break;
     }
-    feasibleCount = evaluated.filter((entry) => entry.utilisation <= 1).length;
-    const selection = await solveSelection({
-      groups: [{ id: MEMBER_ID, candidates: evaluated.map((entry) => ({ id: entry.section.designation, key: entry.section.designation, cost: entry.section.properties.massPerMetre * girderLength, feasible: entry.utilisation <= 1 })) }],
-    });
-    selectionStatus = selection.status;
-    steps.push({ iteration, choice: { [MEMBER_ID]: current.designation }, mass: current.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(state.utilisation) });
-    progress(`round ${iteration}: analysed ${current.designation} (utilisation ${state.utilisation.toFixed(3)}); the lightest candidate that passes under its forces is ${evaluated.length <= candidates.length && feasibleCount > 0 ? evaluated[evaluated.length - 1]?.section.designation : 'none'} (${evaluated.length} of ${candidates.length} checked)`);
-    if (selection.status === 'infeasible') break;
-    const chosenId = selection.choice[MEMBER_ID];
-    const chosen = candidates.find((section) => section.designation === chosenId);
-    if (!chosen) throw new DesignError('ANALYSIS_FAILED', `the optimiser chose '${chosenId}', which is not a candidate`);
+    const columnOptions = selection.columnOptions(state);
+    feasibleCount = girderOptions.filter((entry) => entry.utilisation <= 1).length;
+    const solved = await solveSelection(selection.problem(girderOptions, columnOptions));
+    selectionStatus = solved.status;
+    steps.push({ iteration, choice: { [MEMBER_ID]: current.designation }, mass: current.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(selection.girderUtilisation(state, grades[0] as SteelGrade)) });
+    const chosenGirder = solved.status === 'infeasible' ? undefined : selection.option(solved.choice[MEMBER_ID]);
+    progress(
+      `round ${iteration}: analysed ${current.designation}; under its forces the integer program chooses ${chosenGirder ? `${chosenGirder.section.designation} ${chosenGirder.grade.name}` : 'nothing (no feasible choice)'}${hasColumns && solved.choice[COLUMN_MEMBER_ID] ? ` with columns ${solved.choice[COLUMN_MEMBER_ID]}` : ''} (${girderOptions.length} girder candidates checked)`,
+    );
+    if (!chosenGirder) break;
+    const chosen = chosenGirder.section;
     if (chosen.designation === current.designation) {
       converged = true;
       break;
     }
     if (analysed.has(chosen.designation)) {
-      progress(`round ${iteration}: the choice ${chosen.designation} repeats an earlier round (cycle); keeping the lightest verified design`);
+      progress(`round ${iteration}: the choice ${chosen.designation} repeats an earlier round (cycle); keeping the best verified design`);
       break;
     }
     current = chosen;
   }
 
-  // Forces depend on the section (its self weight, and the depth that is the lever arm of the
+  // Forces depend on the girder section (its self weight, and the depth that is the lever arm of the
   // hopper's pull), so a lighter section can pass under its own forces although it failed under the
-  // forces of a heavier one. Before accepting the loop's answer, re-analyse each lighter candidate
-  // with its own section, lightest first, and take the first that passes.
-  const loopBest = [...analysed.values()].filter((entry) => entry.utilisation <= 1).sort((a, b) => a.section.properties.massPerMetre - b.section.properties.massPerMetre)[0];
-  if (loopBest) {
-    // A lighter section that fails under a few combinations fails under all of them, so each is
-    // first analysed under the combinations that govern the loop's answer, and fully only if it passes.
+  // forces of a heavier one. Before accepting the loop's answer, every girder candidate whose least
+  // possible cost (its own at the cheapest grade, the lightest column, one distinct section) is below
+  // the best verified design is analysed with its own section, lightest first.
+  let best = await selection.bestOver([...analysed.values()]);
+  const loopBest = best ? analysed.get(best.girder.designation) : undefined;
+  if (best && loopBest) {
+    // A section that fails under a few combinations fails under all of them, so each is first
+    // analysed under the combinations that govern the loop's answer, and fully only if it passes.
     const governingCombinations = new Set([...loopBest.envelopes].sort((a, b) => b.check.utilisation - a.check.utilisation).map((envelope) => envelope.combination).slice(0, 3));
     let round = steps.length;
     for (const section of candidates) {
-      if (section.properties.massPerMetre >= loopBest.section.properties.massPerMetre) break;
+      if (selection.lowerBound(section) >= best.objective - tieTolerance(best.objective)) break;
       if (analysed.has(section.designation)) continue;
-      const screen = analyseSection(context, section, credible, governingCombinations);
+      const screened = screenSection(context, section, credible, governingCombinations, grades);
       round += 1;
-      if (screen.utilisation > 1) {
-        steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(screen.utilisation) });
+      if (screened > 1) {
+        steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(screened) });
         continue;
       }
       const state = analyseCached(section);
-      steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(state.utilisation) });
-      if (state.utilisation <= 1) {
-        progress(`descent: the lighter ${section.designation} passes under its own forces (utilisation ${state.utilisation.toFixed(3)})`);
-        break;
+      const utilisation = Math.min(...grades.map((grade) => selection.girderUtilisation(state, grade)));
+      steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(utilisation) });
+      const candidateBest = await selection.bestOver([state]);
+      if (candidateBest && candidateBest.objective < best.objective - tieTolerance(best.objective)) {
+        progress(`descent: the lighter ${section.designation} passes under its own forces (utilisation ${utilisation.toFixed(3)})`);
+        best = candidateBest;
       }
     }
   }
 
-  // The final design is always one that was analysed with its own sections: the lightest verified
-  // one, or, when none passes, the one with the lowest utilisation (reported as not satisfied).
-  const verified = [...analysed.values()].filter((entry) => entry.utilisation <= 1);
-  verified.sort((a, b) => a.section.properties.massPerMetre - b.section.properties.massPerMetre);
+  // The final design is always one that was analysed with its own sections: the least-cost verified
+  // one, or, when none passes, the girder with the lowest utilisation (reported as not satisfied).
   const bestAttempt = [...analysed.values()].sort((a, b) => a.utilisation - b.utilisation || b.section.properties.massPerMetre - a.section.properties.massPerMetre)[0] as SectionAnalysis;
-  const final = verified[0] ?? bestAttempt;
-  const status: DesignResult['status'] = verified.length > 0 ? 'verified' : 'infeasible';
+  const final = best ? (analysed.get(best.girder.designation) as SectionAnalysis) : bestAttempt;
+  const finalGrade = best ? best.grade : context.grade;
+  const finalEnvelopes = selection.girderEnvelopes(final, finalGrade);
+  let finalColumn = best ? best.column : selection.bestAttemptColumn(final, finalGrade);
+  let finalColumnEnvelopes = finalColumn ? selection.columnEnvelopes(final, finalColumn, finalGrade) : [];
+  // The girder model's columns have the axial stiffness of support.columnSection. When the chosen
+  // column differs, the chosen pair is analysed again with the chosen column's own stiffness (the
+  // cap's bearing forces, and so the flange and the twist, depend on it). If that pair fails, the
+  // design keeps the model's column where it passes (then every member was verified with the
+  // stiffness it has), and reports the rejected lighter column.
+  let columnStiffness: NonNullable<DesignResult['optimisation']['columnStiffness']> | undefined;
+  if (finalColumn && finalColumn.designation !== context.column.section.designation) {
+    const own: DesignContext = { ...context, column: { section: finalColumn, axialStiffness: (context.grade.youngsModulus * finalColumn.properties.area) / spec.support.columnHeight } };
+    const recheck = analyseSection(own, final.section, credible);
+    const girderUtilisation = maxUtilisation(finalGrade.name === context.grade.name ? recheck.envelopes : sectionEnvelopes(own, final.section, finalGrade, recheck.scenarios));
+    const demands = columnDemands(loads, layout, casesOf(recheck.scenarios, sizingCombinations(loads)));
+    const columnUtilisation = maxUtilisation(columnChecks(finalColumn, finalGrade, spec.support.columnHeight, demands));
+    const modelColumn = context.column.section;
+    const consistent = girderUtilisation <= 1 && columnUtilisation <= 1;
+    const withinCap = selection.costSummary.maxDistinctSections === null || (modelColumn.designation === final.section.designation ? 1 : 2) <= selection.costSummary.maxDistinctSections;
+    const fallback = best !== undefined && !consistent && withinCap && selection.columnUtilisation(final, modelColumn, finalGrade) <= 1;
+    columnStiffness = {
+      modelColumn: modelColumn.designation,
+      chosenColumn: finalColumn.designation,
+      girderUtilisation: finiteOrNull(girderUtilisation),
+      columnUtilisation: finiteOrNull(columnUtilisation),
+      kept: fallback ? modelColumn.designation : finalColumn.designation,
+    };
+    if (fallback) {
+      finalColumn = modelColumn;
+      finalColumnEnvelopes = selection.columnEnvelopes(final, modelColumn, finalGrade);
+    }
+  }
+  // Serviceability information: the largest settlement of the girder on its bearing (for a slab the
+  // only deflection measure; no limit is set) over the SLS characteristic analyses.
+  const slsNames = serviceabilityCombinations(loads);
+  let settlement: { value: number; combination: string; scenario: string } | null = null;
+  for (const { scenario, analyses: results } of final.scenarios) {
+    for (const analysis of results.filter((candidate) => slsNames.has(candidate.combination))) {
+      const value = settlementOf(analysis);
+      if (!settlement || value > settlement.value) settlement = { value, combination: analysis.combination, scenario: scenario.id };
+    }
+  }
+  const status: DesignResult['status'] = best ? 'verified' : 'infeasible';
+  const grade = finalGrade;
 
 
-  const governing = governingEnvelope(final.envelopes);
+  const governing = governingEnvelope(finalEnvelopes);
+  const finalUtilisation = maxUtilisation(finalEnvelopes);
   if (!governing) throw new DesignError('ANALYSIS_FAILED', 'no check was evaluated for the girder');
 
   const firstModel = final.scenarios[0]?.model; // same geometry in every scenario
@@ -336,10 +668,29 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   const positionFor = (station: Station) => positionOf(firstModel, layout, station);
   // The scenarios not in the envelope are analysed with the chosen section and reported beside it.
   // Reported analyses: every ULS combination (STR and EQU) and the characteristic gravity
-  // combination G + Q_s,f (the load-total guard). The other SLS combinations are listed but not yet
-  // analysed, since no serviceability check is made in this version.
+  // combination G + Q_s,f (the load-total guard) in every scenario; in the credible scenarios also
+  // every SLS characteristic combination (deflection and twist).
   const reported = new Set(loads.combinations.filter((combination) => combination.limitState === 'ULS' || isGravityCheck(combination)).map((combination) => combination.name));
-  const allScenarios = [...credible, ...comparison].map((scenario) => analyseScenario(context, final.section, scenario, reported));
+  const reportedCredible = new Set([...reported, ...serviceabilityCombinations(loads)]);
+  // The credible scenarios keep the final section's own analyses (already checked) and add the
+  // reported combinations not yet analysed; the comparison scenarios are analysed here.
+  const order = new Map(loads.combinations.map((combination, i) => [combination.name, i]));
+  const allScenarios = [...credible, ...comparison].map((scenario): ScenarioAnalysis => {
+    const own = final.scenarios.find((entry) => entry.scenario.id === scenario.id);
+    if (!own) return analyseScenario(context, final.section, scenario, reported);
+    const done = new Set(own.analyses.map((analysis) => analysis.combination));
+    const missing = new Set([...reportedCredible].filter((name) => !done.has(name)));
+    const extra = missing.size > 0 ? analyseScenario(context, final.section, scenario, missing).analyses : [];
+    const analyses = [...own.analyses, ...extra].sort((a, b) => (order.get(a.combination) ?? 0) - (order.get(b.combination) ?? 0));
+    return { scenario, model: own.model, analyses };
+  });
+  // The envelope of each scenario alone: the final's own envelopes for the credible ones.
+  const envelopeOfScenario = new Map(
+    allScenarios.map(({ scenario, model: scenarioModel, analyses: results }) => [
+      scenario.id,
+      credible.includes(scenario) ? finalEnvelopes.filter((envelope) => envelope.scenario === scenario.id) : sectionEnvelopes(context, final.section, grade, [{ scenario, model: scenarioModel, analyses: results }]),
+    ]),
+  );
   for (const scenario of allScenarios) guardLoadTotals(final.section, scenario, loads, girderLength);
   const member: MemberResult = {
     id: MEMBER_ID,
@@ -349,7 +700,7 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     length: girderLength,
     mass: final.section.properties.massPerMetre * girderLength,
     massPerLength: final.section.properties.massPerMetre,
-    utilisation: finiteOrNull(final.utilisation),
+    utilisation: finiteOrNull(finalUtilisation),
     governing: {
       check: governing.check.id,
       title: governing.check.title,
@@ -361,22 +712,55 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
       intermediate: governing.check.intermediate,
     },
   };
-  const utilisations: UtilisationRow[] = final.envelopes.map((envelope) => ({
-    member: MEMBER_ID,
-    section: final.section.designation,
+  const rowOf = (memberId: string, section: SteelSection) => (envelope: CheckEnvelope): UtilisationRow => ({
+    member: memberId,
+    section: section.designation,
     check: envelope.check.id,
     clause: envelope.check.clause,
     combination: envelope.combination,
     scenario: envelope.scenario,
     position: positionFor(envelope.station),
     utilisation: finiteOrNull(envelope.check.utilisation),
-    ...(envelope.check.outOfScope ? { note: envelope.check.outOfScope } : {}),
-  }));
+    title: envelope.check.title,
+    inputs: envelope.check.inputs,
+    intermediate: envelope.check.intermediate,
+    ...(envelope.check.outOfScope || envelope.check.notes ? { note: [envelope.check.outOfScope, ...(envelope.check.notes ?? [])].filter((text) => text !== undefined).join('; ') } : {}),
+  });
+  const members: MemberResult[] = [member];
+  const utilisations: UtilisationRow[] = finalEnvelopes.map(rowOf(MEMBER_ID, final.section));
+  if (finalColumn) {
+    const columnGoverning = governingEnvelope(finalColumnEnvelopes);
+    if (!columnGoverning) throw new DesignError('ANALYSIS_FAILED', 'no check was evaluated for the columns');
+    const columnLength = layout.columns * spec.support.columnHeight;
+    members.push({
+      id: COLUMN_MEMBER_ID,
+      description: `${layout.columns} columns, height ${spec.support.columnHeight.toFixed(3)} m each, pinned at the base and held at the top (web in the radial plane); axial stiffness in the girder model from ${context.column.section.designation} (support.columnSection)`,
+      section: finalColumn.designation,
+      grade: grade.name,
+      length: columnLength,
+      mass: finalColumn.properties.massPerMetre * columnLength,
+      massPerLength: finalColumn.properties.massPerMetre,
+      utilisation: finiteOrNull(maxUtilisation(finalColumnEnvelopes)),
+      governing: {
+        check: columnGoverning.check.id,
+        title: columnGoverning.check.title,
+        clause: columnGoverning.check.clause,
+        combination: columnGoverning.combination,
+        scenario: columnGoverning.scenario,
+        position: { ...positionFor(columnGoverning.station), description: `column C${columnGoverning.check.inputs['column'] ?? ''}` },
+        inputs: columnGoverning.check.inputs,
+        intermediate: columnGoverning.check.intermediate,
+      },
+    });
+    utilisations.push(...finalColumnEnvelopes.map((envelope) => ({ ...rowOf(COLUMN_MEMBER_ID, finalColumn)(envelope), position: { ...positionFor(envelope.station), description: `column C${envelope.check.inputs['column'] ?? ''}` } })));
+  }
+  const steelMass = members.reduce((sum, entry) => sum + entry.mass, 0);
+  const objectiveValue = selection.objectiveOf(members.map((entry) => ({ mass: entry.mass, key: `${entry.section} ${entry.grade}` })), grade);
   // Force diagrams are kept for the governing combination of each scenario and the one with the
   // largest torsion (the others are summarised by their peaks; every one can be re-run with `analyse`).
   const diagramKeys = new Set<string>();
   for (const { scenario, analyses: results } of allScenarios) {
-    const scenarioEnvelope = envelopeChecks(final.section, grade, ulsStations(context, [{ scenario, model: firstModel, analyses: results }]));
+    const scenarioEnvelope = envelopeOfScenario.get(scenario.id) ?? [];
     const worst = governingEnvelope(scenarioEnvelope);
     if (worst) diagramKeys.add(`${scenario.id}|${worst.combination}`);
     const twisting = [...results].sort((a, b) => peakOf(b.stations, 'T') - peakOf(a.stations, 'T'))[0];
@@ -400,7 +784,7 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   );
   const scenarioSummaries = allScenarios.map(({ scenario, analyses: results }) => {
     const isCredible = credible.includes(scenario);
-    const envelope = envelopeChecks(final.section, grade, ulsStations(context, [{ scenario, model: firstModel, analyses: results }]));
+    const envelope = envelopeOfScenario.get(scenario.id) ?? [];
     const maxTension = Math.max(0, ...results.map((analysis) => bearingSummary(analysis).bearings?.maxTension ?? 0));
     // A tension below a thousandth of the largest bearing compression is round-off in practice.
     const maxCompression = Math.max(0, ...results.map((analysis) => bearingSummary(analysis).bearings?.maxCompression ?? 0));
@@ -410,8 +794,14 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
   const girderWeight = final.section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
   const message =
     status === 'verified'
-      ? `${final.section.designation} is the lightest candidate that passes every check under its own re-analysed forces${converged ? '' : ' (the selection loop stopped before the choice repeated)'}`
-      : `no candidate section passes; the best attempt ${final.section.designation} reaches utilisation ${Number.isFinite(final.utilisation) ? final.utilisation.toFixed(3) : 'beyond its resistance'} in ${governing.check.id} (${governing.check.clause})`;
+      ? `${final.section.designation} ${grade.name}${finalColumn ? ` on ${finalColumn.designation} columns` : ''} is the least-cost choice that passes every check under its own re-analysed forces${converged ? '' : ' (the selection loop stopped before the choice repeated)'}`
+      : `no candidate section passes; the best attempt ${final.section.designation} reaches utilisation ${Number.isFinite(finalUtilisation) ? finalUtilisation.toFixed(3) : 'beyond its resistance'} in ${governing.check.id} (${governing.check.clause})`;
+  const stiffnessFails = columnStiffness !== undefined && !((columnStiffness.girderUtilisation ?? Infinity) <= 1 && (columnStiffness.columnUtilisation ?? Infinity) <= 1);
+  const stiffnessNote = !columnStiffness || !stiffnessFails
+    ? ''
+    : columnStiffness.kept === columnStiffness.modelColumn
+      ? `; the lighter ${columnStiffness.chosenColumn} columns were rejected: with their own axial stiffness the utilisations become ${columnStiffness.girderUtilisation?.toFixed(3) ?? 'n/a'} (girder) and ${columnStiffness.columnUtilisation?.toFixed(3) ?? 'n/a'} (columns), so the columns of the girder model (support.columnSection = ${columnStiffness.modelColumn}) are kept`
+      : `; with the axial stiffness of the chosen ${columnStiffness.chosenColumn} columns instead of ${columnStiffness.modelColumn} (support.columnSection) the utilisations become ${columnStiffness.girderUtilisation?.toFixed(3) ?? 'n/a'} (girder) and ${columnStiffness.columnUtilisation?.toFixed(3) ?? 'n/a'} (columns): re-run with support.columnSection = ${columnStiffness.chosenColumn}`;
   const result: DesignResult = {
     schemaVersion: DESIGN_SCHEMA_VERSION,
     tool: { name: TOOL_NAME, version: TOOL_VERSION },
@@ -430,12 +820,24 @@ export async function designFromSpec(spec: BinSpec, options: DesignOptions = {})
     },
     scenarios: scenarioSummaries,
     analyses,
-    members: [member],
+    members,
     utilisations,
-    optimisation: { status: selectionStatus, objective: 'mass', candidates: candidates.length, feasibleCandidates: feasibleCount, iterations: steps, converged, message },
-    totals: { steelMass: member.mass },
+    optimisation: {
+      status: selectionStatus,
+      objective: selection.costObjective ? 'cost' : 'mass',
+      objectiveValue,
+      cost: selection.costSummary,
+      candidates: candidates.length * grades.length + columnCandidates.length * grades.length,
+      feasibleCandidates: feasibleCount,
+      iterations: steps,
+      converged,
+      message: `${message}${stiffnessNote}`,
+      ...(columnStiffness ? { columnStiffness } : {}),
+    },
+    totals: { steelMass },
+    serviceability: { combinations: [...slsNames], deflectionLimitRatio: context.serviceability.deflectionLimitRatio, twistLimit: context.serviceability.twistLimit, maxSettlement: settlement },
   };
-  progress(message);
+  progress(`${message}${stiffnessNote}`);
   const combinations = loads.combinations.map((combination) => ({ name: combination.name, factors: combination.factors }));
   return {
     result,

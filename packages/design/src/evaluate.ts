@@ -53,15 +53,19 @@ export function governingEnvelope(envelopes: CheckEnvelope[]): CheckEnvelope | u
 
 
 /**
- * Whether any check of the section exceeds utilisation 1 at any station: stops at the first excess,
- * visiting the stations of each analysis in order of decreasing strong-axis moment, so that sections
- * far too light are rejected after a handful of evaluations.
+ * The largest utilisation of any check of the section at any station, in one pass: stations in order
+ * of decreasing strong-axis moment, stopping at the first utilisation above 1 (then Infinity), so a
+ * failing section is rejected after a few evaluations and a passing one costs a single pass.
  */
-export function exceedsAnywhere(section: SteelSection, grade: SteelGrade, sets: StationSet[]): boolean {
+export function maxStationUtilisation(section: SteelSection, grade: SteelGrade, sets: StationSet[]): number {
   const ordered = sets.flatMap((set) => set.stations).sort((a, b) => Math.abs(b.My) - Math.abs(a.My) || Math.abs(b.B) - Math.abs(a.B));
+  let max = 0;
   for (const station of ordered) {
     const results = checkSection(section, grade, { N: station.N, Vy: station.Vy, Vz: station.Vz, Tsv: station.Tsv, Tw: station.Tw, My: station.My, Mz: station.Mz, B: station.B });
-    if (results.some((check) => !(check.utilisation <= 1))) return true;
+    for (const check of results) {
+      if (!(check.utilisation <= 1)) return Infinity;
+      if (check.utilisation > max) max = check.utilisation;
+    }
   }
-  return false;
+  return max;
 }

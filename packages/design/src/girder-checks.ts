@@ -39,10 +39,21 @@ export interface ServiceabilityLimits {
 
 export const DEFAULT_SERVICEABILITY: ServiceabilityLimits = { deflectionLimitRatio: 500, twistLimit: 0.01 };
 
+const nodeStations = new WeakMap<AnalysisResult, Map<string, Station>>();
+
 /** The station at the start of the element that leaves a node (x = 0): the place of a node check. */
 function stationAtNode(model: GirderModel, analysis: AnalysisResult, node: string): Station | undefined {
-  const element = model.elements.find((candidate) => candidate.nodeI === node);
-  return analysis.stations.find((station) => station.element === element?.id && station.x === 0);
+  let byNode = nodeStations.get(analysis);
+  if (!byNode) {
+    const elementOfNode = new Map(model.elements.map((element) => [element.id, element.nodeI]));
+    byNode = new Map();
+    for (const station of analysis.stations) {
+      const start = elementOfNode.get(station.element);
+      if (station.x === 0 && start !== undefined && !byNode.has(start)) byNode.set(start, station);
+    }
+    nodeStations.set(analysis, byNode);
+  }
+  return byNode.get(node);
 }
 
 function nodeAngleOf(model: GirderModel, node: string): number {
@@ -71,13 +82,24 @@ interface BearingPoint {
   tensionCapacity?: number;
 }
 
+const bearingPointCache = new WeakMap<AnalysisResult, BearingPoint[]>();
+
 /** The bearing points (cap or slab springs) of an analysis, with their offsets across the flange. */
 export function bearingPoints(model: GirderModel, analysis: AnalysisResult): BearingPoint[] {
+  const cached = bearingPointCache.get(analysis);
+  if (cached) return cached;
+  const points = collectBearingPoints(model, analysis);
+  bearingPointCache.set(analysis, points);
+  return points;
+}
+
+function collectBearingPoints(model: GirderModel, analysis: AnalysisResult): BearingPoint[] {
+  const nodes = new Map(model.nodes.map((node) => [node.id, node]));
   const forces = new Map(analysis.springForces.map((spring) => [spring.id, spring.force]));
   const points: BearingPoint[] = [];
   for (const spring of model.springs ?? []) {
     if (!spring.group || spring.tributaryLength === undefined) continue;
-    const node = model.nodes.find((candidate) => candidate.id === spring.node);
+    const node = nodes.get(spring.node);
     if (!node) continue;
     const r = Math.hypot(node.x, node.y);
     const offset = spring.offset ?? [0, 0, 0];
@@ -159,7 +181,24 @@ function flangeBendingChecks(section: SteelSection, grade: SteelGrade, item: Ana
  * The factored radial (inward) line load of a combination at the support line: the largest over the
  * ring's nodes (the uniform part plus any harmonics), N/m, and the node where it occurs.
  */
+const radialPullCache = new WeakMap<LoadSet, Map<string, { q: number; node: string }>>();
+
 export function radialPull(loads: LoadSet, factors: Record<string, number>, model: GirderModel): { q: number; node: string } {
+  // The pull depends on the loads and the node angles only (the same for every section of a layout).
+  const key = `${model.nodes.length}|${model.nodes[1]?.x ?? 0}|${model.nodes[1]?.y ?? 0}|${JSON.stringify(factors)}`;
+  let byKey = radialPullCache.get(loads);
+  if (!byKey) {
+    byKey = new Map();
+    radialPullCache.set(loads, byKey);
+  }
+  const cached = byKey.get(key);
+  if (cached) return cached;
+  const pull = computeRadialPull(loads, factors, model);
+  byKey.set(key, pull);
+  return pull;
+}
+
+function computeRadialPull(loads: LoadSet, factors: Record<string, number>, model: GirderModel): { q: number; node: string } {
   let best = { q: -Infinity, node: model.nodes[0]?.id ?? '' };
   for (const node of model.nodes) {
     const angle = nodeAngleOf(model, node.id);

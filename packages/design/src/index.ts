@@ -1,5 +1,6 @@
 export * from './result.js';
-export { designFromSpec, CAUTIONS, type DesignOptions, type DesignOutcome } from './design.js';
+export { designFromSpec, CAUTIONS, DEFAULT_COLUMN_SERIES, DEFAULT_PRICE_PER_KG, type DesignOptions, type DesignOutcome } from './design.js';
+export { DEFAULT_SERVICEABILITY, type ServiceabilityLimits } from './girder-checks.js';
 export { DesignError, type DesignErrorCode } from './errors.js';
 export { stableJson } from './json.js';
 export { buildRingModel, type RingLayout, type RingModelInput } from './ring.js';

@@ -182,6 +182,13 @@ export interface UtilisationRow {
   position: Position;
   /** null when the check is outside its scope for this section (see `note`). */
   utilisation: number | null;
+  /** What the check is, in words. */
+  title?: string;
+  /** The check's inputs (SI), as named in its clause. */
+  inputs?: Record<string, number>;
+  /** The check's intermediate values (SI), as named in its clause. */
+  intermediate?: Record<string, number>;
+  /** Out-of-scope reason, or advice that follows from the result (e.g. "web stiffener needed"). */
   note?: string;
 }
 
@@ -195,13 +202,47 @@ export interface OptimisationStep {
 
 export interface OptimisationSummary {
   status: 'optimal' | 'feasible' | 'infeasible';
-  objective: 'mass';
+  /** 'mass' when every price factor is 1 and a distinct section costs nothing; 'cost' otherwise. */
+  objective: 'mass' | 'cost';
+  /**
+   * Value of the objective for the chosen design: sum of mass x price per kg of its grade, plus the
+   * cost per distinct section times the number of distinct (section, grade) pairs (see `cost`).
+   */
+  objectiveValue?: number;
+  /** The cost model of the integer program (DesignOptions, with their defaults). */
+  cost?: {
+    /** Price per kg of each grade allowed (relative units unless the user gives money). */
+    pricePerKg: Record<string, number>;
+    costPerDistinctSection: number;
+    /** At most this many distinct (section, grade) pairs over the member groups; null: no cap. */
+    maxDistinctSections: number | null;
+    grades: string[];
+  };
+  /** Candidates offered to the integer program: (girder sections + column sections) x grades. */
   candidates: number;
-  /** Candidates that passed under the forces of the last round (checked lightest first, so at most 1 for one member group). */
+  /** Girder candidates (section x grade) that passed under the forces of the last round (checked lightest first per grade; heavier ones are dominated and left unchecked). */
   feasibleCandidates: number;
   iterations: OptimisationStep[];
   converged: boolean;
   message: string;
+  /**
+   * Present when the chosen column differs from support.columnSection, whose axial stiffness the
+   * girder model uses: the chosen pair analysed again with the chosen column's own stiffness. When
+   * that pair fails and the model's column passes, the design keeps the model's column (`kept`).
+   */
+  columnStiffness?: { modelColumn: string; chosenColumn: string; girderUtilisation: number | null; columnUtilisation: number | null; kept: string };
+}
+
+/** Serviceability settings and information (the checks themselves are rows of `utilisations`). */
+export interface ServiceabilitySummary {
+  /** The SLS characteristic combinations analysed in the credible scenarios. */
+  combinations: string[];
+  /** Deflection limit between columns: span / this ratio. */
+  deflectionLimitRatio: number;
+  /** Twist limit, rad. */
+  twistLimit: number;
+  /** Largest settlement of the girder on its bearing, m (information only; for a slab the only deflection measure). */
+  maxSettlement: { value: number; combination: string; scenario: string } | null;
 }
 
 export interface DesignResult {
@@ -234,5 +275,7 @@ export interface DesignResult {
   members: MemberResult[];
   utilisations: UtilisationRow[];
   optimisation: OptimisationSummary;
+  /** Total steel mass of all member groups (girder and columns), kg. */
   totals: { steelMass: number };
+  serviceability?: ServiceabilitySummary;
 }
