@@ -494,7 +494,23 @@ function peakOf(stations: Station[], key: 'N' | 'Vz' | 'T' | 'My' | 'Mz' | 'B'):
 }
 
 /** The whole pipeline for one spec: loads, analysis, checks, selection, verification, result. */
-export async function designFromSpec(spec: BinSpec, options: DesignOptions = {}): Promise<DesignOutcome> {
+/** The design options a spec sets (optimisation and serviceability inputs); explicit options win. */
+export function optionsFromSpec(spec: BinSpec): DesignOptions {
+  const series: Record<BinSpec['optimisation']['columnSeries'][number], SteelSection['series']> = { HEA: 'HE A', HEB: 'HE B', HEM: 'HE M' };
+  const prices = Object.fromEntries(Object.entries(spec.optimisation.pricePerKg ?? {}).filter(([, price]) => price !== undefined)) as Record<string, number>;
+  return {
+    ...(spec.optimisation.grades ? { grades: spec.optimisation.grades } : {}),
+    ...(Object.keys(prices).length > 0 ? { pricePerKg: prices } : {}),
+    costPerDistinctSection: spec.optimisation.costPerDistinctSection,
+    ...(spec.optimisation.maxDistinctSections !== undefined ? { maxDistinctSections: spec.optimisation.maxDistinctSections } : {}),
+    columnSeries: spec.optimisation.columnSeries.map((family) => series[family]),
+    deflectionLimitRatio: spec.serviceability.deflectionLimitRatio,
+    twistLimit: spec.serviceability.twistLimit,
+  };
+}
+
+export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}): Promise<DesignOutcome> {
+  const options: DesignOptions = { ...optionsFromSpec(spec), ...explicit };
   const progress = options.progress ?? (() => undefined);
   const maxIterations = options.maxIterations ?? 8;
   const stationsPerElement = options.stationsPerElement ?? 3;

@@ -129,6 +129,37 @@ export const binSpecInput = z.strictObject(
         { error: 'must be a table of partial factors' },
       )
       .default({ permanentFactor: 1.35, solidFactor: 1.5, variableFactor: 1.5, combinationMethod: '6.10' }),
+    optimisation: z
+      .strictObject(
+        {
+          grades: z.array(choice(steelGrades), { error: 'must be a list of steel grades' }).min(1, { error: 'must name at least one grade' }).optional(),
+          pricePerKg: z
+            .strictObject(
+              {
+                S235: quantity({ min: 0, max: 1000, unit: '(price per kg)' }).optional(),
+                S275: quantity({ min: 0, max: 1000, unit: '(price per kg)' }).optional(),
+                S355: quantity({ min: 0, max: 1000, unit: '(price per kg)' }).optional(),
+                S460: quantity({ min: 0, max: 1000, unit: '(price per kg)' }).optional(),
+              },
+              { error: 'must be a table of prices per kg by grade' },
+            )
+            .optional(),
+          costPerDistinctSection: quantity({ min: 0, max: 1e9, unit: '(price units)' }).default(0),
+          maxDistinctSections: wholeNumber(1, 20, 'distinct sections').optional(),
+          columnSeries: z.array(choice(['HEA', 'HEB', 'HEM']), { error: 'must be a list of column section families' }).min(1).default(['HEB']),
+        },
+        { error: 'must be a table of optimisation settings' },
+      )
+      .default({ costPerDistinctSection: 0, columnSeries: ['HEB'] }),
+    serviceability: z
+      .strictObject(
+        {
+          deflectionLimitRatio: quantity({ min: 50, max: 5000, unit: '(span / limit)' }).default(500),
+          twistLimit: quantity({ min: 0.0001, max: 0.2, unit: 'rad' }).default(0.01),
+        },
+        { error: 'must be a table with deflectionLimitRatio and twistLimit' },
+      )
+      .default({ deflectionLimitRatio: 500, twistLimit: 0.01 }),
     roof: z
       .strictObject(
         {

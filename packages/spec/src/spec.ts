@@ -51,6 +51,16 @@ export interface BinSpec {
     credibleScenarios: Array<(typeof supportScenarios)[number]>;
   };
   actions: { permanentFactor: number; solidFactor: number; variableFactor: number; combinationMethod: '6.10' | '6.10a/b' };
+  /** Section choice: grades to choose from (one for all members), prices per kg, cost per distinct section, cap. */
+  optimisation: {
+    grades?: Array<'S235' | 'S275' | 'S355' | 'S460'>;
+    pricePerKg?: Partial<Record<'S235' | 'S275' | 'S355' | 'S460', number>>;
+    costPerDistinctSection: number;
+    maxDistinctSections?: number;
+    columnSeries: Array<'HEA' | 'HEB' | 'HEM'>;
+  };
+  /** Serviceability limits: deflection span / ratio, twist rad. */
+  serviceability: { deflectionLimitRatio: number; twistLimit: number };
   /** Roof loads on plan, Pa; pitch rad. */
   roof?: { deadLoad: number; imposedLoad: number; pitch: number };
   /** Characteristic ground snow load, Pa (EN 1991-1-3). */
@@ -156,6 +166,8 @@ export function normaliseSpec(document: unknown): BinSpec {
       credibleScenarios: [...new Set(input.support.credibleScenarios ?? (input.support.type === 'ring-on-slab' ? (['slab-contact'] as const) : (['column-cap-contact'] as const)))],
     },
     actions: input.actions,
+    optimisation: input.optimisation,
+    serviceability: { deflectionLimitRatio: input.serviceability.deflectionLimitRatio, twistLimit: input.serviceability.twistLimit },
     ...(input.roof ? { roof: { deadLoad: input.roof.deadLoad * KPA, imposedLoad: input.roof.imposedLoad * KPA, pitch: degToRad(input.roof.pitch) } } : {}),
     ...(input.snow ? { snow: { groundLoad: input.snow.groundLoad * KPA, exposureCoefficient: input.snow.exposureCoefficient, thermalCoefficient: input.snow.thermalCoefficient } } : {}),
     ...(input.wind
