@@ -51,17 +51,23 @@ export interface CombinationSummary {
   clause: string;
 }
 
+/**
+ * Pressures against depth. Deliberately declared here rather than re-exported from the loads package:
+ * this file is the output contract (docs/output-schema.md), kept stable when the loads package changes.
+ */
 export interface PressureProfile {
   case: string;
   part: 'wall' | 'hopper';
-  /** Depth below the equivalent surface, m. */
+  /** Depth below the equivalent surface (wall) or below the transition (hopper), m. */
   z: number[];
-  /** Horizontal (normal) pressure on the wall, Pa. */
+  /** Wall: horizontal pressure p_h. Hopper: pressure normal to the hopper wall p_n. Pa. */
   ph: number[];
-  /** Wall frictional traction, Pa. */
+  /** Wall: frictional traction p_w. Hopper: frictional traction p_t. Pa. */
   pw: number[];
   /** Mean vertical stress in the solid, Pa. */
   pv: number[];
+  /** Hopper only: height above the apex of the cone, m (EN 1991-4 6.3). */
+  x?: number[];
 }
 
 export interface LoadsResult {
