@@ -1,23 +1,15 @@
 // Lint rules for every project, and the package boundaries of DESIGN.md as import restrictions.
-// tests/src/boundaries.test.ts checks the same rules by reading the sources, so a rule disabled here
-// still fails the tests.
+// The table is package-boundaries.json; tests/src/boundaries.test.ts checks the same rules by reading
+// the sources, so a rule disabled here still fails the tests.
+import { readFileSync } from 'node:fs';
 import tseslint from 'typescript-eslint';
 
-const internal = ['spec', 'loads', 'girder', 'steel', 'optimiser', 'design', 'deliverables', 'cli'];
-const ioLibraries = ['exceljs', 'pdfmake', 'pdfmake/*', 'vega', 'vega-lite', 'node:fs', 'fs', 'node:fs/promises'];
-
+const boundaries = JSON.parse(readFileSync(new URL('./package-boundaries.json', import.meta.url), 'utf8'));
 /** Which internal packages each project may import (DESIGN.md, "Allowed imports"). */
-const allowed = {
-  'packages/spec': [],
-  'packages/loads': [],
-  'packages/girder': [],
-  'packages/steel': [],
-  'packages/optimiser': [],
-  'packages/design': ['spec', 'loads', 'girder', 'steel', 'optimiser'],
-  'packages/deliverables': ['design'],
-  'apps/cli': ['design', 'deliverables', 'spec'],
-};
-const numerical = ['packages/loads', 'packages/girder', 'packages/steel', 'packages/optimiser'];
+const allowed = boundaries.allowed;
+const internal = Object.keys(allowed).map((dir) => dir.split('/')[1]);
+const numerical = boundaries.numerical;
+const ioLibraries = boundaries.documentLibraries.flatMap((name) => [name, `${name}/*`]);
 
 function boundaryRule(dir) {
   const forbidden = internal.filter((name) => !allowed[dir].includes(name)).map((name) => `@binsupport/${name}`);
@@ -31,8 +23,8 @@ function boundaryRule(dir) {
   if (numerical.includes(dir)) {
     patterns.push({ group: ioLibraries, message: 'Numerical packages do no file or document I/O.' });
   }
-  if (dir === 'packages/deliverables') {
-    patterns.push({ group: ['@binsupport/design'], allowTypeImports: true, message: 'deliverables imports design for types only.' });
+  for (const name of boundaries.typeOnly[dir] ?? []) {
+    patterns.push({ group: [`@binsupport/${name}`], allowTypeImports: true, message: `${dir} imports @binsupport/${name} for types only.` });
   }
   return {
     files: [`${dir}/src/**/*.ts`],

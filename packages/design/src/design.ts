@@ -7,7 +7,7 @@ import { DesignError } from './errors.js';
 import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
 import { columnChecks, columnDemands, type ColumnDemand } from './columns.js';
-import { DEFAULT_SERVICEABILITY, displacementChecks, forceChecks, settlementOf, type AnalysedCase, type ServiceabilityLimits } from './girder-checks.js';
+import { bearingPoints, DEFAULT_SERVICEABILITY, displacementChecks, forceChecks, settlementOf, type AnalysedCase, type ServiceabilityLimits } from './girder-checks.js';
 import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
 import { SCENARIOS, scenarioSummary, type ScenarioDefinition } from './scenarios.js';
 import { girderModelDocument, type GirderModelDocument } from './model-file.js';
@@ -444,10 +444,23 @@ export function designContext(spec: BinSpec, stationsPerElement = 5, serviceabil
 }
 
 /** Where a station lies around the ring, in words a site engineer recognises. */
+const modelIndexCache = new WeakMap<GirderModel, { elements: Map<string, GirderModel['elements'][number]>; nodes: Map<string, GirderModel['nodes'][number]> }>();
+
+/** Elements and nodes by id, built once per model (positions are asked for every station). */
+function modelIndex(model: GirderModel) {
+  let index = modelIndexCache.get(model);
+  if (!index) {
+    index = { elements: new Map(model.elements.map((element) => [element.id, element])), nodes: new Map(model.nodes.map((node) => [node.id, node])) };
+    modelIndexCache.set(model, index);
+  }
+  return index;
+}
+
 function positionOf(model: GirderModel, layout: RingLayout, station: Station): Position {
-  const element = model.elements.find((candidate) => candidate.id === station.element);
-  const nodeI = model.nodes.find((node) => node.id === element?.nodeI);
-  const nodeJ = model.nodes.find((node) => node.id === element?.nodeJ);
+  const index = modelIndex(model);
+  const element = index.elements.get(station.element);
+  const nodeI = element ? index.nodes.get(element.nodeI) : undefined;
+  const nodeJ = element ? index.nodes.get(element.nodeJ) : undefined;
   if (!element || !nodeI || !nodeJ) return { element: station.element, x: station.x, angle: 0, description: station.element };
   const L = Math.hypot(nodeJ.x - nodeI.x, nodeJ.y - nodeI.y, nodeJ.z - nodeI.z);
   const t = L > 0 ? station.x / L : 0;
@@ -489,8 +502,15 @@ function diagramOf(model: GirderModel, layout: RingLayout, stations: Station[]):
   };
 }
 
-function peakOf(stations: Station[], key: 'N' | 'Vz' | 'T' | 'My' | 'Mz' | 'B'): number {
-  return stations.reduce((max, station) => Math.max(max, Math.abs(station[key])), 0);
+type Peaks = AnalysisSummary['peaks'];
+
+/** Largest absolute internal forces over all stations of an analysis, in one pass. */
+function peaksOf(stations: Station[]): Peaks {
+  const peaks: Peaks = { N: 0, Vz: 0, T: 0, My: 0, Mz: 0, B: 0 };
+  for (const station of stations) {
+    for (const key of Object.keys(peaks) as Array<keyof Peaks>) peaks[key] = Math.max(peaks[key], Math.abs(station[key]));
+  }
+  return peaks;
 }
 
 /** The whole pipeline for one spec: loads, analysis, checks, selection, verification, result. */
@@ -774,12 +794,16 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
   const objectiveValue = selection.objectiveOf(members.map((entry) => ({ mass: entry.mass, key: `${entry.section} ${entry.grade}` })), grade);
   // Force diagrams are kept for the governing combination of each scenario and the one with the
   // largest torsion (the others are summarised by their peaks; every one can be re-run with `analyse`).
+  // Peaks and bearing state, once per reported analysis.
+  const peaksByAnalysis = new Map(allScenarios.flatMap(({ analyses: results }) => results.map((analysis) => [analysis, peaksOf(analysis.stations)] as const)));
+  const bearingsByAnalysis = new Map(allScenarios.flatMap(({ model, analyses: results }) => results.map((analysis) => [analysis, bearingSummary(model, analysis)] as const)));
+  const peakT = (analysis: AnalysisResult) => peaksByAnalysis.get(analysis)?.T ?? 0;
   const diagramKeys = new Set<string>();
   for (const { scenario, analyses: results } of allScenarios) {
     const scenarioEnvelope = envelopeOfScenario.get(scenario.id) ?? [];
     const worst = governingEnvelope(scenarioEnvelope);
     if (worst) diagramKeys.add(`${scenario.id}|${worst.combination}`);
-    const twisting = [...results].sort((a, b) => peakOf(b.stations, 'T') - peakOf(a.stations, 'T'))[0];
+    const twisting = [...results].sort((a, b) => peakT(b) - peakT(a))[0];
     if (twisting) diagramKeys.add(`${scenario.id}|${twisting.combination}`);
   }
   diagramKeys.add(`${governing.scenario}|${governing.combination}`);
@@ -793,17 +817,18 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
       residual: analysis.residual,
       reactionSum: analysis.reactionSum,
       appliedSum: analysis.appliedSum,
-      peaks: { N: peakOf(analysis.stations, 'N'), Vz: peakOf(analysis.stations, 'Vz'), T: peakOf(analysis.stations, 'T'), My: peakOf(analysis.stations, 'My'), Mz: peakOf(analysis.stations, 'Mz'), B: peakOf(analysis.stations, 'B') },
+      peaks: peaksByAnalysis.get(analysis) ?? peaksOf(analysis.stations),
       ...(diagramKeys.has(`${scenario.id}|${analysis.combination}`) ? { diagram: diagramOf(model, layout, analysis.stations) } : {}),
-      ...bearingSummary(analysis),
+      ...bearingsByAnalysis.get(analysis),
     })),
   );
   const scenarioSummaries = allScenarios.map(({ scenario, analyses: results }) => {
     const isCredible = credible.includes(scenario);
     const envelope = envelopeOfScenario.get(scenario.id) ?? [];
-    const maxTension = Math.max(0, ...results.map((analysis) => bearingSummary(analysis).bearings?.maxTension ?? 0));
+    const bearings = results.map((analysis) => bearingsByAnalysis.get(analysis)?.bearings);
+    const maxTension = Math.max(0, ...bearings.map((state) => state?.maxTension ?? 0));
     // A tension below a thousandth of the largest bearing compression is round-off in practice.
-    const maxCompression = Math.max(0, ...results.map((analysis) => bearingSummary(analysis).bearings?.maxCompression ?? 0));
+    const maxCompression = Math.max(0, ...bearings.map((state) => state?.maxCompression ?? 0));
     return { ...scenarioSummary(scenario, isCredible), utilisation: finiteOrNull(maxUtilisation(envelope)), needsTension: maxTension > 1e-3 * maxCompression, maxBearingTension: maxTension };
   });
   const geometry = circularBinGeometry(spec.bin);
@@ -862,27 +887,25 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
 }
 
 /** Bearing forces of an analysis with bearing points (springs with a group). */
-function bearingSummary(analysis: AnalysisResult): Pick<AnalysisSummary, 'bearings'> {
-  const bearingForces = analysis.springForces.filter((spring) => spring.id.includes('-cap-') || spring.id.includes('-bearing-'));
-  if (bearingForces.length === 0) return {};
-  const byColumn = new Map<string, number[]>();
-  for (const spring of bearingForces) {
-    const group = spring.id.includes('-cap-') ? `${spring.id.split('-cap-')[0]} cap` : `bearing at ${spring.id.split('-bearing-')[0]}`;
-    byColumn.set(group, [...(byColumn.get(group) ?? []), spring.force]);
-  }
+/** Bearing state of an analysis, from the bearing points of its model (springs with a group). */
+function bearingSummary(model: GirderModel, analysis: AnalysisResult): Pick<AnalysisSummary, 'bearings'> {
+  const points = bearingPoints(model, analysis);
+  if (points.length === 0) return {};
+  const byGroup = new Map<string, number[]>();
+  for (const point of points) byGroup.set(point.group, [...(byGroup.get(point.group) ?? []), point.force]);
+  const total = (forces: number[]) => forces.reduce((sum, force) => sum + force, 0);
   let mostLoaded = { group: '', forces: [] as number[] };
-  for (const [group, forces] of byColumn) {
-    const total = forces.reduce((sum, force) => sum + force, 0);
-    if (mostLoaded.forces.length === 0 || total > mostLoaded.forces.reduce((sum, force) => sum + force, 0)) mostLoaded = { group, forces };
+  for (const [group, forces] of byGroup) {
+    if (mostLoaded.forces.length === 0 || total(forces) > total(mostLoaded.forces)) mostLoaded = { group, forces };
   }
   // A bearing point counts as in contact when it carries more than a trace of the largest force.
-  const maxCompression = Math.max(0, ...bearingForces.map((spring) => spring.force));
+  const maxCompression = Math.max(0, ...points.map((point) => point.force));
   const threshold = 1e-9 * Math.max(maxCompression, 1);
   return {
     bearings: {
-      contactFraction: bearingForces.filter((spring) => spring.force > threshold).length / bearingForces.length,
+      contactFraction: points.filter((point) => point.force > threshold).length / points.length,
       maxCompression,
-      maxTension: Math.max(0, ...bearingForces.map((spring) => -spring.force)),
+      maxTension: Math.max(0, ...points.map((point) => -point.force)),
       mostLoadedColumn: mostLoaded,
     },
   };

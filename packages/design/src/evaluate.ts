@@ -51,7 +51,6 @@ export function governingEnvelope(envelopes: CheckEnvelope[]): CheckEnvelope | u
   return governing;
 }
 
-
 /**
  * The largest utilisation of any check of the section at any station, in one pass: stations in order
  * of decreasing strong-axis moment, stopping at the first utilisation above 1 (then Infinity), so a

@@ -44,23 +44,6 @@ function twoProduct(a: number, b: number): [number, number] {
   return [x, al * bl - (((x - ah * bh) - al * bh) - ah * bl)];
 }
 
-/** r = f − K u, each row summed with Dot2. */
-export function residual(K: SymmetricSparse, u: Float64Array, f: Float64Array): Float64Array {
-  const r = new Float64Array(K.size);
-  K.rows.forEach((row, i) => {
-    let p = f[i] as number;
-    let s = 0;
-    for (const [j, v] of row) {
-      const [h, e] = twoProduct(-v, u[j] as number);
-      const x = p + h;
-      const z = x - p;
-      s += p - (x - z) + (h - z) + e;
-      p = x;
-    }
-    r[i] = p + s;
-  });
-  return r;
-}
 
 /**
  * Compressed sparse rows, both triangles, columns sorted: the fast form of a fixed pattern, used
