@@ -5,6 +5,7 @@ import { analyseModelFile, designFromSpec, DesignError, stableJson, type ModelFi
 import { atomicWrite, writeDesignPdf, writeDesignXlsx } from '@binsupport/deliverables';
 import { readGirderModelFile, readSpecFile, SpecError, writeSpecTemplate } from '@binsupport/spec';
 import { runLoads, runMaterials, runSections } from './catalogue-commands.js';
+import { runCompare } from './compare-command.js';
 import { version } from './version.js';
 
 export interface CliStreams {
@@ -21,6 +22,7 @@ const mainHelp = `binsupport ${version}: design of the support girders of steel 
 
 Usage:
   binsupport design <spec> --out <folder>       design a bin's support girder (spec: .yaml, .json, .xlsx)
+  binsupport compare <options> --out <folder>   design and compare many options (tonnage, cost)
   binsupport template --xlsx <spec.xlsx>        write a blank spec-sheet workbook to fill in
   binsupport analyse <model> [--json]           re-run one girder model (as written by design)
   binsupport loads <spec> [--json]              the load derivation of a spec, without the girder
@@ -188,6 +190,7 @@ export async function runCli(argv: string[], streams: CliStreams): Promise<numbe
   }
   if (command === 'design') return runDesign(rest, streams);
   if (command === 'analyse') return runAnalyse(rest, streams);
+  if (command === 'compare') return runCompare(rest, streams);
   if (command === 'loads') return runLoads(rest, streams);
   if (command === 'template') return runTemplate(rest, streams);
   if (command === 'materials') return runMaterials(rest, streams);

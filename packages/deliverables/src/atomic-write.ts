@@ -3,6 +3,7 @@
 // and the temp file is then renamed over the target. On any failure the temp file is removed and an
 // existing target is left as it was.
 import { randomBytes } from 'node:crypto';
+import { rmSync } from 'node:fs';
 import { open, rename, rm } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 
@@ -12,8 +13,34 @@ export function tempPathFor(path: string): string {
   return join(dirname(path), `${basename(path)}.tmp-${suffix}`);
 }
 
+/** Temp files of the writes in progress (for abandonPendingWrites). */
+const pending = new Set<string>();
+let abandoned = false;
+
+/** Thrown by a write that was in progress when abandonPendingWrites was called. */
+export class WriteAbandonedError extends Error {
+  constructor(path: string) {
+    super(`the write of ${path} was abandoned (the program is stopping)`);
+    this.name = 'WriteAbandonedError';
+  }
+}
+
+/**
+ * Remove the temp files of every write in progress, synchronously (for a signal handler: Ctrl-C or
+ * SIGTERM mid-run leaves no partial file), and refuse any later rename. Returns the removed paths.
+ */
+export function abandonPendingWrites(): string[] {
+  abandoned = true;
+  const removed = [...pending];
+  for (const tempPath of removed) rmSync(tempPath, { force: true });
+  pending.clear();
+  return removed;
+}
+
 export async function atomicWrite(path: string, bytes: Uint8Array | string): Promise<void> {
+  if (abandoned) throw new WriteAbandonedError(path);
   const tempPath = tempPathFor(path);
+  pending.add(tempPath);
   try {
     // 'wx': never reuse a file that happens to exist under the temp name.
     const handle = await open(tempPath, 'wx', 0o644);
@@ -23,10 +50,13 @@ export async function atomicWrite(path: string, bytes: Uint8Array | string): Pro
     } finally {
       await handle.close();
     }
+    if (abandoned) throw new WriteAbandonedError(path);
     await rename(tempPath, path);
   } catch (error) {
     await rm(tempPath, { force: true });
     throw error;
+  } finally {
+    pending.delete(tempPath);
   }
   await syncFolder(dirname(path));
 }

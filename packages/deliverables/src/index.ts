@@ -1,4 +1,4 @@
-export { atomicWrite } from './atomic-write.js';
+export { atomicWrite, abandonPendingWrites, WriteAbandonedError } from './atomic-write.js';
 export { renderDesignXlsx, writeDesignXlsx, DEFAULT_STEEL_PRICE_PER_TONNE, type WorkbookOptions } from './xlsx-report.js';
 export { renderDesignPdf, writeDesignPdf } from './pdf-report.js';
 export type { ReportOptions } from './report-data.js';
@@ -15,3 +15,4 @@ export {
   formatTonnes,
   formatUtilisation,
 } from './units.js';
+export { renderCompareXlsx, writeCompareXlsx, renderComparePdf, writeComparePdf, compareWorkbook, cheapestSentence, changesText, COMPARE_SHEET, COMPARE_SUMMARY_SHEET, type CompareWorkbookOptions } from './compare-report.js';

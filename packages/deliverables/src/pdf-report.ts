@@ -61,7 +61,7 @@ export const REPORT_STANDING = [
   'Local codes, national annexes and licensed engineering practice govern over anything in this report.',
 ];
 
-const colours = {
+export const colours = {
   heading: '#1b4f72',
   rule: '#9aa5b1',
   headerFill: '#e6ecf1',
@@ -76,10 +76,10 @@ const colours = {
 };
 
 /** A4 portrait, content width in points. */
-const pageMargins: [number, number, number, number] = [48, 58, 48, 50];
-const contentWidth = 595.28 - pageMargins[0] - pageMargins[2];
+export const pageMargins: [number, number, number, number] = [48, 58, 48, 50];
+export const contentWidth = 595.28 - pageMargins[0] - pageMargins[2];
 
-const gridLayout: PdfTableLayout = {
+export const gridLayout: PdfTableLayout = {
   hLineWidth: () => 0.5,
   vLineWidth: () => 0.5,
   hLineColor: () => colours.rule,
@@ -100,38 +100,38 @@ const keyValueLayout: PdfTableLayout = {
   paddingBottom: () => 1.5,
 };
 
-function heading(text: string): PdfNode {
+export function heading(text: string): PdfNode {
   return { text, style: 'h1', headlineLevel: 1 };
 }
 
-function subheading(text: string): PdfNode {
+export function subheading(text: string): PdfNode {
   return { text, style: 'h2', headlineLevel: 2 };
 }
 
 /** The heading of a figure, kept with it inside an unbreakable stack (so no headlineLevel). */
-function figureHeading(text: string): PdfNode {
+export function figureHeading(text: string): PdfNode {
   return { text, style: 'h2' };
 }
 
-function paragraph(text: PdfContent): PdfNode {
+export function paragraph(text: PdfContent): PdfNode {
   return { text, style: 'body' };
 }
 
-function caption(text: string): PdfNode {
+export function caption(text: string): PdfNode {
   return { text, style: 'caption' };
 }
 
 /** A header cell; a numeric column's unit goes on its own line so narrow columns stay readable. */
-function headerCell(text: string, alignment: PdfNode['alignment'] = 'left'): PdfNode {
+export function headerCell(text: string, alignment: PdfNode['alignment'] = 'left'): PdfNode {
   const shown = alignment === 'right' ? text.replace(/ \[/, '\n[') : text;
   return { text: shown, style: 'tableHeader', alignment };
 }
 
-function numberCell(text: string): PdfNode {
+export function numberCell(text: string): PdfNode {
   return { text, alignment: 'right', noWrap: true };
 }
 
-function utilisationCell(utilisation: number | null, alignment: PdfNode['alignment'] = 'right'): PdfNode {
+export function utilisationCell(utilisation: number | null, alignment: PdfNode['alignment'] = 'right'): PdfNode {
   const band = utilisationBand(utilisation);
   const cell: PdfNode = { text: formatUtilisation(utilisation), alignment, bold: band !== 'adequate', noWrap: true };
   if (band === 'near limit') {
@@ -146,7 +146,7 @@ function utilisationCell(utilisation: number | null, alignment: PdfNode['alignme
 }
 
 /** A table with a repeated header row. */
-function table(header: PdfNode[], rows: PdfContent[][], widths: Array<number | string>): PdfNode {
+export function table(header: PdfNode[], rows: PdfContent[][], widths: Array<number | string>): PdfNode {
   return {
     table: { headerRows: 1, widths, body: [header, ...rows], dontBreakRows: true, keepWithHeaderRows: 1 },
     layout: gridLayout,
@@ -155,7 +155,7 @@ function table(header: PdfNode[], rows: PdfContent[][], widths: Array<number | s
 }
 
 /** Label / value pairs, two to a row when `pairsPerRow` is 2. */
-function keyValueTable(pairs: Array<[string, PdfContent]>, pairsPerRow: 1 | 2 = 1): PdfNode {
+export function keyValueTable(pairs: Array<[string, PdfContent]>, pairsPerRow: 1 | 2 = 1): PdfNode {
   // Short tables are kept on one page; they hold no headings (see figureHeading).
   const body: PdfContent[][] = [];
   for (let i = 0; i < pairs.length; i += pairsPerRow) {
@@ -797,6 +797,23 @@ function traceSection(result: DesignResult): PdfContent[] {
 // ----------------------------------------------------------------------------------------------
 
 /** The pdfmake document definition of the report (exposed for tests and for reuse by other reports). */
+/** Text styles shared by the calculation report and the comparison report. */
+export const REPORT_STYLES: PdfDocumentDefinition['styles'] = {
+  kicker: { fontSize: 9, color: colours.muted, margin: [0, 0, 0, 2] },
+  title: { fontSize: 18, bold: true, color: colours.heading, margin: [0, 0, 0, 2] },
+  subtitle: { fontSize: 11, color: colours.muted, margin: [0, 0, 0, 10] },
+  h1: { fontSize: 13, bold: true, color: colours.heading, margin: [0, 14, 0, 6] },
+  h2: { fontSize: 10, bold: true, color: colours.heading, margin: [0, 10, 0, 4] },
+  body: { fontSize: 9, margin: [0, 0, 0, 6], alignment: 'justify' },
+  caption: { fontSize: 7.5, italics: true, color: colours.muted, margin: [0, 2, 0, 8] },
+  caution: { fontSize: 9.5, margin: [0, 1, 0, 1] },
+  table: { fontSize: 8, margin: [0, 2, 0, 6] },
+  tableHeader: { bold: true, fontSize: 7.5, fillColor: colours.headerFill },
+  mono: { fontSize: 7.5 },
+  pageHeader: { fontSize: 7.5, color: colours.muted },
+  pageFooter: { fontSize: 7.5, color: colours.muted },
+};
+
 export async function designPdfDefinition(result: DesignResult, options: ReportOptions = {}): Promise<PdfDocumentDefinition> {
   const date = issueDate(result, options);
   const content: PdfContent[] = [
@@ -848,21 +865,7 @@ export async function designPdfDefinition(result: DesignResult, options: ReportO
       node.headlineLevel !== undefined &&
       (helpers.getFollowingNodesOnPage().every((next) => next.headlineLevel !== undefined) || (node.startPosition.verticalRatio ?? 0) > 0.875),
     defaultStyle: { font: 'Roboto', fontSize: 8.5, lineHeight: 1.15 },
-    styles: {
-      kicker: { fontSize: 9, color: colours.muted, margin: [0, 0, 0, 2] },
-      title: { fontSize: 18, bold: true, color: colours.heading, margin: [0, 0, 0, 2] },
-      subtitle: { fontSize: 11, color: colours.muted, margin: [0, 0, 0, 10] },
-      h1: { fontSize: 13, bold: true, color: colours.heading, margin: [0, 14, 0, 6] },
-      h2: { fontSize: 10, bold: true, color: colours.heading, margin: [0, 10, 0, 4] },
-      body: { fontSize: 9, margin: [0, 0, 0, 6], alignment: 'justify' },
-      caption: { fontSize: 7.5, italics: true, color: colours.muted, margin: [0, 2, 0, 8] },
-      caution: { fontSize: 9.5, margin: [0, 1, 0, 1] },
-      table: { fontSize: 8, margin: [0, 2, 0, 6] },
-      tableHeader: { bold: true, fontSize: 7.5, fillColor: colours.headerFill },
-      mono: { fontSize: 7.5 },
-      pageHeader: { fontSize: 7.5, color: colours.muted },
-      pageFooter: { fontSize: 7.5, color: colours.muted },
-    },
+    styles: REPORT_STYLES,
   };
 }
 

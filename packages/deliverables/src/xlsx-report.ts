@@ -36,16 +36,16 @@ export interface WorkbookOptions extends ReportOptions {
 }
 
 // Our own colours (ARGB).
-const fills = {
+export const fills = {
   header: 'FFDCE4EC',
   input: 'FFFFF4CC',
   exceeded: 'FFF2B8B0',
   nearLimit: 'FFFBE3A6',
   caution: 'FFFDF1E7',
 };
-const fonts = { exceeded: 'FF7A1C12', nearLimit: 'FF6B4E00', heading: 'FF1B4F72', caution: 'FF8A4B08' };
+export const fonts = { exceeded: 'FF7A1C12', nearLimit: 'FF6B4E00', heading: 'FF1B4F72', caution: 'FF8A4B08' };
 
-const formats = {
+export const formats = {
   integer: '0',
   mass: '#,##0',
   one: '0.0',
@@ -57,13 +57,13 @@ const formats = {
   money: '#,##0',
 };
 
-interface Column {
+export interface Column {
   header: string;
   width: number;
   numFmt?: string;
 }
 
-function columnLetter(index: number): string {
+export function columnLetter(index: number): string {
   // 1 -> A, 27 -> AA
   let n = index;
   let letters = '';
@@ -75,12 +75,12 @@ function columnLetter(index: number): string {
   return letters;
 }
 
-function solidFill(argb: string): ExcelJS.Fill {
+export function solidFill(argb: string): ExcelJS.Fill {
   return { type: 'pattern', pattern: 'solid', fgColor: { argb }, bgColor: { argb } };
 }
 
 /** A sheet holding one table: header row 1 (frozen, filtered), data from row 2. */
-function addTableSheet(workbook: Workbook, name: string, columns: Column[], rows: CellValue[][]): Worksheet {
+export function addTableSheet(workbook: Workbook, name: string, columns: Column[], rows: CellValue[][]): Worksheet {
   const sheet = workbook.addWorksheet(name, { views: [{ state: 'frozen', xSplit: 0, ySplit: 1, topLeftCell: 'A2', activeCell: 'A2' }] });
   sheet.columns = columns.map((column) => ({ header: column.header, width: column.width, style: column.numFmt === undefined ? {} : { numFmt: column.numFmt } }));
   const header = sheet.getRow(1);
@@ -100,7 +100,7 @@ function addTableSheet(workbook: Workbook, name: string, columns: Column[], rows
 }
 
 /** Colour a utilisation column: above 1.0 red, above 0.9 amber (the rule order decides). */
-function colourUtilisations(sheet: Worksheet, columnIndex: number, rowCount: number): void {
+export function colourUtilisations(sheet: Worksheet, columnIndex: number, rowCount: number): void {
   if (rowCount === 0) {
     return;
   }
@@ -451,7 +451,7 @@ function inputsSheet(workbook: Workbook, result: DesignResult): void {
 // ----------------------------------------------------------------------------------------------
 // Summary
 
-function label(cell: Cell, text: string): void {
+export function label(cell: Cell, text: string): void {
   cell.value = text;
   cell.font = { color: { argb: 'FF4D5A66' } };
 }

@@ -199,6 +199,28 @@ function selectionSetup(context: DesignContext, options: DesignOptions, girderLe
     problem,
     option: (id: string | undefined): CandidateOption | undefined => byId.get(id ?? ''),
     bestOver,
+    /**
+     * A lower bound on the objective of any choice with this girder, from a screened analysis (a few
+     * combinations): for each grade in which the girder passes there, its cost plus the cheapest
+     * column that passes under the screened column demands, plus one distinct section. More
+     * combinations only add demands, so the full analysis can pass no girder grade and no column
+     * that fails here: the bound holds. Infinity when no column passes. The column memo is not used
+     * (it is keyed by the girder section, whose full analysis may follow).
+     */
+    screenedLowerBound: (screened: SectionAnalysis, passingGrades: SteelGrade[]): number => {
+      const demands = hasColumns ? governingDemands(columnDemands(context.loads, layout, casesOf(screened.scenarios, sizingCombinations(context.loads)))) : [];
+      let bound = Infinity;
+      for (const grade of passingGrades) {
+        let columns = 0;
+        if (hasColumns) {
+          const passing = columnCandidates.find((column) => maxUtilisation(columnChecks(column, grade, spec.support.columnHeight, demands)) <= 1);
+          if (!passing) continue;
+          columns = columnCost(passing, grade);
+        }
+        bound = Math.min(bound, girderCost(screened.section, grade) + columns + costPerDistinctSection);
+      }
+      return bound;
+    },
     /** The least objective any choice with this girder can have. */
     lowerBound: (section: SteelSection): number =>
       section.properties.massPerMetre * girderLength * minPrice + (lightestColumn ? lightestColumn.properties.massPerMetre * columnLength * minPrice : 0) + costPerDistinctSection,
@@ -370,12 +392,17 @@ function screenUnderForces(context: DesignContext, section: SteelSection, grade:
  * grades of its largest utilisation there (the fast scan: Infinity at the first excess). Used to skip
  * a full analysis of a section that fails anyway.
  */
-function screenSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string>, grades: SteelGrade[]): number {
+function screenSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string>, grades: SteelGrade[]): { utilisation: number; state: SectionAnalysis; passingGrades: SteelGrade[] } {
   const analysed = scenarios.map((scenario) => analyseScenario(context, section, scenario, only));
-  const state = { section, scenarios: analysed, uls: ulsStations(context, analysed), envelopes: [], utilisation: 0 };
+  const state: SectionAnalysis = { section, scenarios: analysed, uls: ulsStations(context, analysed), envelopes: [], utilisation: 0 };
   const displacement = maxUtilisation(displacementChecks(context, casesOf(analysed, serviceabilityCombinations(context.loads))));
-  if (!(displacement <= 1)) return displacement;
-  return Math.max(displacement, Math.min(...grades.map((grade) => screenUnderForces(context, section, grade, state))));
+  if (!(displacement <= 1)) return { utilisation: displacement, state, passingGrades: [] };
+  const byGrade = grades.map((grade) => ({ grade, utilisation: screenUnderForces(context, section, grade, state) }));
+  return {
+    utilisation: Math.max(displacement, Math.min(...byGrade.map((entry) => entry.utilisation))),
+    state,
+    passingGrades: byGrade.filter((entry) => entry.utilisation <= 1).map((entry) => entry.grade),
+  };
 }
 
 /** Analyse one scenario under the combinations named in `only` (default: all of them). */
@@ -630,8 +657,18 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
       if (analysed.has(section.designation)) continue;
       const screened = screenSection(context, section, credible, governingCombinations, grades);
       round += 1;
-      if (screened > 1) {
-        steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(screened) });
+      if (screened.utilisation > 1) {
+        steps.push({ iteration: round, choice: { [MEMBER_ID]: section.designation }, mass: section.properties.massPerMetre * girderLength, maxUtilisation: finiteOrNull(screened.utilisation) });
+        continue;
+      }
+      if (selection.screenedLowerBound(screened.state, screened.passingGrades) >= best.objective - tieTolerance(best.objective)) {
+        steps.push({
+          iteration: round,
+          choice: { [MEMBER_ID]: section.designation },
+          mass: section.properties.massPerMetre * girderLength,
+          maxUtilisation: finiteOrNull(screened.utilisation),
+          note: 'passes under the governing combinations, but with the columns those need it cannot be cheaper than the best verified design: not analysed further',
+        });
         continue;
       }
       const state = analyseCached(section);

@@ -204,6 +204,8 @@ export interface OptimisationStep {
   mass: number;
   /** Largest utilisation under the section's own forces; null when a check is outside its scope (e.g. a class 4 section). */
   maxUtilisation: number | null;
+  /** Why a step was not taken further (e.g. a candidate that passes under a few combinations but cannot be cheaper). */
+  note?: string;
 }
 
 export interface OptimisationSummary {

@@ -257,15 +257,14 @@ export function resultantsAlong(
   m: Vec3,
   xs: readonly number[],
 ): StationResultants[] {
-  const at = (i: number): number => p[i] as number;
-  const N0 = -at(0);
-  const Vy0 = -at(1);
-  const Vz0 = -at(2);
-  const T0 = -at(3);
-  const My0 = -at(4);
-  const Mz0 = -at(5);
-  const B0 = -at(6);
-  const BL = at(13);
+  const N0 = -(p[0] as number);
+  const Vy0 = -(p[1] as number);
+  const Vz0 = -(p[2] as number);
+  const T0 = -(p[3] as number);
+  const My0 = -(p[4] as number);
+  const Mz0 = -(p[5] as number);
+  const B0 = -(p[6] as number);
+  const BL = p[13] as number;
   const [qx, qy, qz] = q;
   const [mx, my, mz] = m;
   const lambda = torsionLambda({ GIt: section.G * section.It, EIw: section.E * section.Iw, L });

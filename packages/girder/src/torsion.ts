@@ -122,16 +122,23 @@ export function bimomentAt(x: number, L: number, lambda: number, B0: number, BL:
     };
   }
   const oneMinusE2mu = -Math.expm1(-2 * mu);
-  // S(s) = sinh λs / sinh λL and C(s) = dS/ds = λ cosh λs / sinh λL.
-  const S = (s: number): number => (Math.exp(-lambda * (L - s)) * -Math.expm1(-2 * lambda * s)) / oneMinusE2mu;
-  const C = (s: number): number => (lambda * Math.exp(-lambda * (L - s)) * (1 + Math.exp(-2 * lambda * s))) / oneMinusE2mu;
   const W = (-Math.expm1(-lambda * x) * Math.expm1(-lambda * (L - x))) / (lambda * lambda * (1 + Math.exp(-mu)));
   const s = x - L / 2;
   const a = Math.abs(s);
   // W'(x) = sinh λs / (λ cosh(λL/2)), s = x − L/2, |λs| ≤ λL/2.
   const dW = (Math.sign(s) * Math.exp(lambda * a - mu / 2) * -Math.expm1(-2 * lambda * a)) / (lambda * (1 + Math.exp(-mu)));
   return {
-    B: B0 * S(L - x) + BL * S(x) + m * W,
-    dB: -B0 * C(L - x) + BL * C(x) + m * dW,
+    B: B0 * sinhRatio(L - x, L, lambda, oneMinusE2mu) + BL * sinhRatio(x, L, lambda, oneMinusE2mu) + m * W,
+    dB: -B0 * coshRatio(L - x, L, lambda, oneMinusE2mu) + BL * coshRatio(x, L, lambda, oneMinusE2mu) + m * dW,
   };
+}
+
+/** S(s) = sinh λs / sinh λL, written with exponentials of non-positive arguments (oneMinusE2mu = 1 − e^(−2λL)). */
+function sinhRatio(s: number, L: number, lambda: number, oneMinusE2mu: number): number {
+  return (Math.exp(-lambda * (L - s)) * -Math.expm1(-2 * lambda * s)) / oneMinusE2mu;
+}
+
+/** C(s) = dS/ds = λ cosh λs / sinh λL. */
+function coshRatio(s: number, L: number, lambda: number, oneMinusE2mu: number): number {
+  return (lambda * Math.exp(-lambda * (L - s)) * (1 + Math.exp(-2 * lambda * s))) / oneMinusE2mu;
 }

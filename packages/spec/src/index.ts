@@ -7,3 +7,4 @@ export { mmToM, degToRad, knPerM3ToNPerM3 } from './units.js';
 export { girderModelFile, parseGirderModelFile, type GirderModelFile, type GirderModelFileSection } from './girder-model.js';
 export { writeSpecTemplate, parseSpecWorkbook, readSpecWorkbook, normaliseSpecWorkbook, SPEC_SHEET, README_SHEET, TEMPLATE_EQUIPMENT_ROWS, type SpecSheetDocument } from './workbook.js';
 export { specSheetFields, type SpecSheetField, type SheetFieldKind } from './sheet-fields.js';
+export { readOptionsFile, expandOptionsDocument, parseOptionsWorkbook, setInputPath, optionsFileInput, MAX_OPTIONS, BASE_OPTION_NAME, OPTIONS_SHEET, type OptionsFile, type OptionCase, type InputOverride, type CapacityTarget, type OptionsFileInput } from './options.js';

@@ -159,7 +159,7 @@ function fail(code: 'PARSE_ERROR' | 'INVALID_INPUT', path: string, message: stri
 }
 
 /** A cell's value as typed: formulas give their cached result, rich text its plain text. */
-function plainValue(value: CellValue): string | number | boolean | Date | null {
+export function plainValue(value: CellValue): string | number | boolean | Date | null {
   if (value === null || value === undefined) return null;
   if (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean' || value instanceof Date) return value;
   if ('richText' in value) return value.richText.map((part) => part.text).join('');
@@ -178,7 +178,7 @@ function isoDate(date: Date): string {
   return date.toISOString().slice(0, 10);
 }
 
-function asText(value: string | number | boolean | Date): string {
+export function asText(value: string | number | boolean | Date): string {
   if (value instanceof Date) return isoDate(value);
   return String(value).trim();
 }
@@ -199,7 +199,7 @@ function splitList(value: string | number | boolean | Date): string[] {
 }
 
 /** Convert a filled cell to the value the YAML reader would give for that input. */
-function inputValue(field: SpecSheetField, value: string | number | boolean | Date): unknown {
+export function inputValue(field: SpecSheetField, value: string | number | boolean | Date): unknown {
   switch (field.kind) {
     case 'number':
     case 'whole number':
@@ -235,7 +235,7 @@ function setPath(document: Record<string, unknown>, parts: string[], value: unkn
   if (last !== undefined) node[last] = value;
 }
 
-async function loadWorkbook(bytes: Uint8Array, source: string): Promise<Workbook> {
+export async function loadWorkbook(bytes: Uint8Array, source: string): Promise<Workbook> {
   const workbook = new ExcelJS.Workbook();
   try {
     const copy = new Uint8Array(bytes.byteLength);

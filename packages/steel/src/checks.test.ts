@@ -196,3 +196,39 @@ describe('check behaviour', () => {
     expect(() => checkSection(section, grade, forces, { eta: 2 })).toThrowError(/eta must lie between 1.0 and 1.2/);
   });
 });
+
+describe('sectionUtilisations (the scan used over many stations)', () => {
+  // Equality with checkSection is the contract: the scan decides which station governs, checkSection
+  // then reports it. Random forces over rolled sections and a slender welded web (shear-buckling and
+  // class 4 paths), with a fixed seed.
+  it('gives exactly the utilisations of checkSection, check by check, in SECTION_CHECK_IDS order', async () => {
+    const { SECTION_CHECK_IDS, sectionUtilisations } = await import('./checks.js');
+    const { weldedISection } = await import('./welded.js');
+    // The welded girder (h_w/t_w ~ 196, c/t of the flange ~ 12) is class 4 and needs shear buckling.
+    const sections = [rolledSection('IPE 300'), rolledSection('HE 300 B'), rolledSection('IPE 600'), rolledSection('HE 1000 M'), weldedISection({ depth: 1.2, flangeWidth: 0.3, flangeThickness: 0.012, webThickness: 0.006 })];
+    const grades = ['S235', 'S355', 'S460'].map((name) => steelGrade(name));
+    let seed = 12345;
+    const random = (): number => {
+      seed = (seed * 1103515245 + 12345) % 2147483648;
+      return seed / 2147483648;
+    };
+    const signed = (scale: number): number => (random() < 0.15 ? 0 : (2 * random() - 1) * scale);
+    const out = new Float64Array(SECTION_CHECK_IDS.length);
+    let compared = 0;
+    let outOfScope = 0;
+    for (let i = 0; i < 3000; i++) {
+      const section = sections[i % sections.length] as (typeof sections)[number];
+      const grade = grades[i % grades.length] as (typeof grades)[number];
+      const forces: InternalForces = { N: signed(3e6), Vy: signed(4e5), Vz: signed(1.5e6), Tsv: signed(4e4), Tw: signed(4e4), My: signed(2e6), Mz: signed(3e5), B: signed(2e4) };
+      const reports = checkSection(section, grade, forces);
+      sectionUtilisations(section, grade, forces, out);
+      expect(reports.map((report) => report.id)).toEqual([...SECTION_CHECK_IDS]);
+      reports.forEach((report, k) => expect(out[k], `${report.id} of ${section.designation}`).toBe(report.utilisation));
+      compared += 1;
+      if (reports.some((report) => report.outOfScope !== undefined)) outOfScope += 1;
+    }
+    expect(compared).toBe(3000);
+    // the out-of-scope paths were exercised, not only the plain ratios
+    expect(outOfScope).toBeGreaterThan(100);
+  });
+});

@@ -192,8 +192,13 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
   };
 }
 
+/** A utilisation made Infinity when the check is out of scope (a nil effect stays 0). */
+function scoped(utilisation: number, message: string | undefined): number {
+  return message === undefined || utilisation === 0 ? utilisation : Number.POSITIVE_INFINITY;
+}
+
 function outOfScope(result: CheckResult, message: string | undefined): CheckResult {
-  if (message === undefined || result.utilisation === 0) return result;
+  if (scoped(result.utilisation, message) === result.utilisation) return result;
   return { ...result, utilisation: Number.POSITIVE_INFINITY, outOfScope: message };
 }
 
@@ -238,6 +243,11 @@ function bendingCheck(section: CheckableSection, forces: InternalForces, r: Resi
   return outOfScope(result, r.classMessage);
 }
 
+/** EN 1993-1-1 6.2.6(6): webs with h_w / t_w > 72 eps / eta need the shear buckling check of EN 1993-1-5. */
+function shearBucklingLimit(section: CheckableSection, r: Resistances, eta: number): { webSlenderness: number; limit: number } {
+  return { webSlenderness: section.properties.webDepth / section.dimensions.webThickness, limit: (72 * r.epsilon) / eta };
+}
+
 function shearCheck(section: CheckableSection, forces: InternalForces, r: Resistances, direction: 'y' | 'z', eta: number): CheckResult {
   const shear = direction === 'z' ? forces.Vz : forces.Vy;
   const resistance = direction === 'z' ? r.shearTorsionResistanceZ : r.shearTorsionResistanceY;
@@ -262,9 +272,7 @@ function shearCheck(section: CheckableSection, forces: InternalForces, r: Resist
     },
   };
   if (direction === 'z') {
-    // EN 1993-1-1 6.2.6(6): webs with h_w / t_w > 72 eps / eta need the shear buckling check of EN 1993-1-5.
-    const webSlenderness = section.properties.webDepth / section.dimensions.webThickness;
-    const limit = (72 * r.epsilon) / eta;
+    const { webSlenderness, limit } = shearBucklingLimit(section, r, eta);
     result.intermediate['h_w/t_w'] = webSlenderness;
     result.intermediate['72eps/eta'] = limit;
     if (webSlenderness > limit) {
@@ -292,16 +300,16 @@ function torsionStresses(section: CheckableSection, forces: InternalForces): { f
   };
 }
 
+function torsionUtilisation(s: ReturnType<typeof torsionStresses>, r: Resistances): number {
+  const shearStrength = r.designStrength / Math.sqrt(3);
+  return Math.max(ratio(s.flangeStVenant + s.warpingShear, shearStrength), ratio(s.webStVenant, shearStrength), ratio(s.warpingNormal, r.designStrength));
+}
+
 function torsionCheck(section: CheckableSection, forces: InternalForces, r: Resistances): CheckResult {
   const p = section.properties;
   const s = torsionStresses(section, forces);
   const shearStrength = r.designStrength / Math.sqrt(3);
-  const flangeShear = s.flangeStVenant + s.warpingShear;
-  const utilisation = Math.max(
-    ratio(flangeShear, shearStrength),
-    ratio(s.webStVenant, shearStrength),
-    ratio(s.warpingNormal, r.designStrength),
-  );
+  const utilisation = torsionUtilisation(s, r);
   return {
     id: 'torsion',
     title: 'Torsion: St Venant and warping stresses',
@@ -329,20 +337,28 @@ function torsionCheck(section: CheckableSection, forces: InternalForces, r: Resi
   };
 }
 
-/** A point of the cross-section where the yield criterion is evaluated. */
-interface StressPoint {
-  name: string;
-  sigma: number;
-  tau: number;
-}
+/** The critical points of the section where the yield criterion is evaluated, in the order of stressPointValues. */
+const STRESS_POINT_NAMES = [
+  'flange tip +y +z',
+  'flange tip -y +z',
+  'flange at web +z',
+  'web at flange junction +z',
+  'flange tip +y -z',
+  'flange tip -y -z',
+  'flange at web -z',
+  'web at flange junction -z',
+  'web at mid-depth',
+] as const;
+const STRESS_POINT_COUNT = STRESS_POINT_NAMES.length;
 
 /**
- * Elastic stresses at the critical points of the section. Normal stress from N, My, Mz and B with the
- * sign conventions of InternalForces; shear stresses from Vy, Vz (tau = V S / (I t)), St Venant torsion
- * (T_sv t / I_t) and warping torsion (T_w S_w / (I_w t_f)). Shear parts that may act in either sense
- * at a point are added by magnitude, which is conservative.
+ * Elastic stresses at the critical points of the section, written to `out` as (sigma, tau) pairs in
+ * the order of STRESS_POINT_NAMES. Normal stress from N, My, Mz and B with the sign conventions of
+ * InternalForces; shear stresses from Vy, Vz (tau = V S / (I t)), St Venant torsion (T_sv t / I_t)
+ * and warping torsion (T_w S_w / (I_w t_f)). Shear parts that may act in either sense at a point are
+ * added by magnitude, which is conservative.
  */
-function stressPoints(section: CheckableSection, forces: InternalForces): StressPoint[] {
+function stressPointValues(section: CheckableSection, forces: InternalForces, out: Float64Array): void {
   const p = section.properties;
   const { depth: h, flangeWidth: b, webThickness: tw, flangeThickness: tf, rootRadius: r } = section.dimensions;
   const h0 = p.flangeCentroidDistance;
@@ -361,68 +377,76 @@ function stressPoints(section: CheckableSection, forces: InternalForces): Stress
   const flangeShearFromVz = (Math.abs(forces.Vz) * (b / 2) * (h0 / 2)) / p.secondMomentOfAreaY;
   const flangeShearFromVy = (Math.abs(forces.Vy) * ((tf * b * b) / 8)) / (p.secondMomentOfAreaZ * tf);
 
-  const points: StressPoint[] = [];
+  let k = 0;
   for (const zSign of [1, -1]) {
-    const side = zSign > 0 ? '+z' : '-z';
     for (const ySign of [1, -1]) {
-      points.push({
-        name: `flange tip ${ySign > 0 ? '+y' : '-y'} ${side}`,
-        sigma: sigmaAt((ySign * b) / 2, (zSign * h) / 2, ((ySign * b) / 2) * ((zSign * h0) / 2)),
-        tau: t.flangeStVenant,
-      });
+      out[k++] = sigmaAt((ySign * b) / 2, (zSign * h) / 2, ((ySign * b) / 2) * ((zSign * h0) / 2));
+      out[k++] = t.flangeStVenant;
     }
-    points.push({
-      name: `flange at web ${side}`,
-      sigma: sigmaAt(0, (zSign * h) / 2, 0),
-      tau: t.flangeStVenant + t.warpingShear + flangeShearFromVy + flangeShearFromVz,
-    });
-    points.push({
-      name: `web at flange junction ${side}`,
-      sigma: sigmaAt(0, (zSign * hw) / 2, 0),
-      tau: webShearAtJunction + t.webStVenant,
-    });
+    out[k++] = sigmaAt(0, (zSign * h) / 2, 0);
+    out[k++] = t.flangeStVenant + t.warpingShear + flangeShearFromVy + flangeShearFromVz;
+    out[k++] = sigmaAt(0, (zSign * hw) / 2, 0);
+    out[k++] = webShearAtJunction + t.webStVenant;
   }
-  points.push({ name: 'web at mid-depth', sigma: sigmaAt(0, 0, 0), tau: webShearAtCentre + t.webStVenant });
-  return points;
+  out[k++] = sigmaAt(0, 0, 0);
+  out[k++] = webShearAtCentre + t.webStVenant;
+}
+
+/** EN 1993-1-1 6.2.1(5) with sigma_z,Ed = 0: (sigma_x / f)^2 + 3 (tau / f)^2, f = f_y / gamma_M0. */
+function yieldCriterionAt(values: Float64Array, index: number, f: number): number {
+  return ((values[2 * index] as number) / f) ** 2 + 3 * ((values[2 * index + 1] as number) / f) ** 2;
+}
+
+/** The largest criterion over the points and the first point that reaches it. */
+function worstYieldPoint(values: Float64Array, f: number): { criterion: number; index: number } {
+  let criterion = 0;
+  let index = 0;
+  for (let i = 0; i < STRESS_POINT_COUNT; i++) {
+    const value = yieldCriterionAt(values, i, f);
+    if (value > criterion) {
+      criterion = value;
+      index = i;
+    }
+  }
+  return { criterion, index };
 }
 
 function yieldCriterionCheck(section: CheckableSection, forces: InternalForces, r: Resistances): CheckResult {
-  const f = r.designStrength;
-  const points = stressPoints(section, forces);
+  const values = new Float64Array(2 * STRESS_POINT_COUNT);
+  stressPointValues(section, forces, values);
   const intermediate: Record<string, number> = {};
-  let worstCriterion = 0;
-  let worstIndex = 0;
-  points.forEach((point, index) => {
-    // EN 1993-1-1 6.2.1(5) with sigma_z,Ed = 0: (sigma_x / f)^2 + 3 (tau / f)^2 <= 1, f = f_y / gamma_M0.
-    const criterion = (point.sigma / f) ** 2 + 3 * (point.tau / f) ** 2;
-    intermediate[`sigma_x ${point.name}`] = point.sigma;
-    intermediate[`tau ${point.name}`] = point.tau;
-    if (criterion > worstCriterion) {
-      worstCriterion = criterion;
-      worstIndex = index;
-    }
+  STRESS_POINT_NAMES.forEach((name, index) => {
+    intermediate[`sigma_x ${name}`] = values[2 * index] as number;
+    intermediate[`tau ${name}`] = values[2 * index + 1] as number;
   });
-  intermediate['criterion'] = worstCriterion;
-  intermediate['governingPoint'] = worstIndex;
+  const worst = worstYieldPoint(values, r.designStrength);
+  intermediate['criterion'] = worst.criterion;
+  intermediate['governingPoint'] = worst.index;
   const result: CheckResult = {
     id: 'yield-criterion',
-    title: `Yield criterion at the critical points (governing: ${points[worstIndex]?.name ?? 'none'})`,
+    title: `Yield criterion at the critical points (governing: ${STRESS_POINT_NAMES[worst.index]})`,
     clause: 'EN 1993-1-1 6.2.1(5)',
-    utilisation: Math.sqrt(worstCriterion),
+    utilisation: Math.sqrt(worst.criterion),
     inputs: { ...forces, f_y: r.yieldStrength, gamma_M0: r.gammaM0 },
     intermediate,
   };
   return outOfScope(result, r.classMessage);
 }
 
+function interactionTerms(forces: InternalForces, r: Resistances): { axialTerm: number; bendingYTerm: number; bendingZTerm: number; bimomentTerm: number } {
+  return {
+    axialTerm: ratio(Math.abs(forces.N), r.axialResistance),
+    bendingYTerm: ratio(Math.abs(forces.My), r.momentShearResistanceY),
+    bendingZTerm: ratio(Math.abs(forces.Mz), r.momentShearResistanceZ),
+    bimomentTerm: ratio(r.warpingNormalStress, r.designStrength),
+  };
+}
+
 function interactionCheck(forces: InternalForces, r: Resistances): CheckResult {
   // EN 1993-1-1 6.2.1(7): N_Ed/N_Rd + M_y,Ed/M_y,Rd + M_z,Ed/M_z,Rd <= 1, here with the warping normal
   // stress of the bimoment added as a fourth term sigma_w / (f_y / gamma_M0), and the moment
   // resistances reduced for shear per 6.2.8.
-  const axialTerm = ratio(Math.abs(forces.N), r.axialResistance);
-  const bendingYTerm = ratio(Math.abs(forces.My), r.momentShearResistanceY);
-  const bendingZTerm = ratio(Math.abs(forces.Mz), r.momentShearResistanceZ);
-  const bimomentTerm = ratio(r.warpingNormalStress, r.designStrength);
+  const { axialTerm, bendingYTerm, bendingZTerm, bimomentTerm } = interactionTerms(forces, r);
   const result: CheckResult = {
     id: 'interaction',
     title: 'Axial force, biaxial bending and bimoment (linear interaction)',
@@ -463,6 +487,37 @@ export function checkSection(section: CheckableSection, grade: SteelGrade, force
     yieldCriterionCheck(section, forces, r),
     interactionCheck(forces, r),
   ];
+}
+
+/** The ids of the checks of checkSection, in its order (also the order of sectionUtilisations). */
+export const SECTION_CHECK_IDS = ['axial', 'bending-y', 'bending-z', 'shear-z', 'shear-y', 'torsion', 'yield-criterion', 'interaction'] as const;
+
+const scratchStressPoints = new Float64Array(2 * STRESS_POINT_COUNT);
+
+/**
+ * The utilisations of checkSection, in the order of SECTION_CHECK_IDS, written to `out` without
+ * building the reports: the same resistances and the same expressions (the helpers above are shared
+ * by both), for scanning many stations. Report the governing ones with checkSection.
+ */
+export function sectionUtilisations(section: CheckableSection, grade: SteelGrade, forces: InternalForces, out: Float64Array, options: CheckOptions = {}): Float64Array {
+  checkForces(forces);
+  const r = resistances(section, grade, forces, options);
+  const eta = options.eta ?? 1.0;
+  const message = r.classMessage;
+  const axial = ratio(Math.abs(forces.N), r.axialResistance);
+  out[0] = forces.N >= 0 ? axial : scoped(axial, message);
+  out[1] = scoped(ratio(Math.abs(forces.My), r.momentShearResistanceY), message);
+  out[2] = scoped(ratio(Math.abs(forces.Mz), r.momentShearResistanceZ), message);
+  const shearZ = ratio(Math.abs(forces.Vz), r.shearTorsionResistanceZ);
+  const { webSlenderness, limit } = shearBucklingLimit(section, r, eta);
+  out[3] = webSlenderness > limit ? scoped(shearZ, 'shear buckling') : shearZ;
+  out[4] = ratio(Math.abs(forces.Vy), r.shearTorsionResistanceY);
+  out[5] = torsionUtilisation(torsionStresses(section, forces), r);
+  stressPointValues(section, forces, scratchStressPoints);
+  out[6] = scoped(Math.sqrt(worstYieldPoint(scratchStressPoints, r.designStrength).criterion), message);
+  const terms = interactionTerms(forces, r);
+  out[7] = scoped(terms.axialTerm + terms.bendingYTerm + terms.bendingZTerm + terms.bimomentTerm, message);
+  return out;
 }
 
 /** The check with the largest utilisation (the first of equals); undefined for an empty list. */

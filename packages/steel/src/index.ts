@@ -8,7 +8,7 @@ export { steelGrade, steelGradeNames, strengthsForThickness } from './grades.js'
 export type { SteelGrade, SteelGradeOptions, StrengthBand } from './grades.js';
 export { classifySection, sectionYieldStrength } from './classification.js';
 export type { ClassifiableSection, CombinedClassification, Fabrication, ElementClassification, SectionClass, SectionClassification } from './classification.js';
-export { checkSection, governingCheck } from './checks.js';
+export { checkSection, governingCheck, sectionUtilisations, SECTION_CHECK_IDS } from './checks.js';
 export type { CheckableSection, CheckOptions, CheckResult, InternalForces } from './checks.js';
 export {
   bucklingReductionFactor,
