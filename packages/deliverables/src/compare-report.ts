@@ -231,6 +231,22 @@ export function compareChartSpec(result: CompareResult, quantity: 'tonnage' | 'c
   };
 }
 
+/** Landscape A4 with the margins below: the room a chart may take, pt. */
+const CHART_BOX = { width: 740, height: 440 };
+
+/** The width at which an SVG fits the chart box whole (its own aspect ratio kept). */
+export function fittedWidth(svg: string, box: { width: number; height: number } = CHART_BOX): number {
+  const width = Number(/<svg[^>]*\swidth="([\d.]+)"/.exec(svg)?.[1]);
+  const height = Number(/<svg[^>]*\sheight="([\d.]+)"/.exec(svg)?.[1]);
+  if (!(width > 0 && height > 0)) return box.width;
+  return Math.min(box.width, (box.height * width) / height);
+}
+
+async function chartPage(title: string, spec: TopLevelSpec, note: string): Promise<PdfContent[]> {
+  const svg = await renderChartSvg(spec);
+  return [{ ...heading(title), pageBreak: 'before' }, svgNode(svg, fittedWidth(svg)), caption(note)];
+}
+
 function fixed(value: number | null | undefined, digits: number): string {
   return value === null || value === undefined ? '' : value.toFixed(digits);
 }
@@ -301,8 +317,8 @@ export async function comparePdfDefinition(result: CompareResult): Promise<PdfDo
     ranked.length > 0 ? rankedTable : paragraph('No option has a verified design.'),
   ];
   if (ranked.length > 0) {
-    content.push(heading('Steel tonnage of the verified options'), svgNode(await renderChartSvg(compareChartSpec(result, 'tonnage')), 740), caption('Ranked by cost, cheapest first; the cheapest feasible option is drawn in its own colour.'));
-    content.push(heading('Cost of the verified options'), svgNode(await renderChartSvg(compareChartSpec(result, 'cost')), 740), caption('Price units: kg of steel times the relative price per kg of its grade, plus the cost per distinct section.'));
+    content.push(...(await chartPage('Steel tonnage of the verified options', compareChartSpec(result, 'tonnage'), 'Ranked by cost, cheapest first; the cheapest feasible option is drawn in its own colour.')));
+    content.push(...(await chartPage('Cost of the verified options', compareChartSpec(result, 'cost'), 'Price units: kg of steel times the relative price per kg of its grade, plus the cost per distinct section.')));
   }
   if (others.length > 0) {
     content.push(

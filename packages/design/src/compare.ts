@@ -4,7 +4,7 @@
 // options, so any split of the list gives the same rows.
 import { createHash } from 'node:crypto';
 import { circularBinGeometry } from '@binsupport/loads';
-import { normaliseSpec, setInputPath, SpecError, type InputOverride, type OptionCase, type OptionsFile } from '@binsupport/spec';
+import { normaliseSpec, setInputPath, SpecError, type BinSpec, type InputOverride, type OptionCase, type OptionsFile } from '@binsupport/spec';
 import { CAUTIONS, designFromSpec } from './design.js';
 import { DesignError } from './errors.js';
 import { stableJson } from './json.js';
@@ -75,10 +75,23 @@ export interface CompareShard {
   rows: CompareRow[];
 }
 
-/** SHA-256 over the names, capacities and spec documents of the expanded options, in order. */
+/** A copy with the keys of every table in sorted order (lists keep their order). */
+function sortedKeys(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(sortedKeys);
+  if (typeof value === 'object' && value !== null) {
+    return Object.fromEntries(Object.keys(value).sort().map((key) => [key, sortedKeys((value as Record<string, unknown>)[key])]));
+  }
+  return value;
+}
+
+/**
+ * SHA-256 over the title and the names, capacities and spec documents of the expanded options, in
+ * order, with the keys of each table sorted: the same study written with its inputs in another order
+ * has the same digest.
+ */
 export function optionsDigest(file: OptionsFile): string {
   const canonical = file.cases.map((option) => ({ name: option.name, capacity: option.capacity ?? null, document: option.document }));
-  return createHash('sha256').update(stableJson({ title: file.title, cases: canonical })).digest('hex');
+  return createHash('sha256').update(stableJson(sortedKeys({ title: file.title, cases: canonical }))).digest('hex');
 }
 
 /** The options a shard runs: every count-th option from index - 1 (1-based index), so each shard gets a share of every sweep. */
@@ -97,7 +110,7 @@ function errorRow(option: OptionCase, overrides: InputOverride[], status: 'inval
 }
 
 /** Volume of the full bin, m3: the cylinder to the top of its wall and the conical hopper (frustum). */
-function binVolume(bin: ReturnType<typeof normaliseSpec>['bin']): number {
+export function binVolume(bin: BinSpec['bin']): number {
   const geometry = circularBinGeometry(bin);
   return geometry.planArea * bin.cylinderHeight + geometry.hopperVolume;
 }
@@ -129,16 +142,24 @@ function withCapacity(option: OptionCase): { document: Record<string, unknown>; 
   return { document, overrides: [...option.overrides, { path: 'bin.cylinderHeight', value: cylinderHeight }] };
 }
 
+/**
+ * The validated spec of an option (SI) and the inputs it changes: at constant capacity with the
+ * cylinder height found for its diameter. Throws SpecError for an input that cannot be designed.
+ */
+export function prepareOption(option: OptionCase): { spec: BinSpec; overrides: InputOverride[] } {
+  const prepared = withCapacity(option);
+  return { spec: normaliseSpec(prepared.document), overrides: prepared.overrides };
+}
+
 /** Design one option into its row; every failure becomes the row's status and message, never an exception. */
 export async function designOption(option: OptionCase): Promise<CompareRow> {
-  let prepared: { document: Record<string, unknown>; overrides: InputOverride[] };
-  let spec: ReturnType<typeof normaliseSpec>;
+  let prepared: { spec: BinSpec; overrides: InputOverride[] };
   try {
-    prepared = withCapacity(option);
-    spec = normaliseSpec(prepared.document);
+    prepared = prepareOption(option);
   } catch (error) {
     return errorRow(option, option.overrides, error instanceof SpecError || error instanceof DesignError ? 'invalid' : 'failed', error);
   }
+  const spec = prepared.spec;
   let result;
   try {
     result = (await designFromSpec(spec)).result;

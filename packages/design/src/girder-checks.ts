@@ -11,6 +11,7 @@ import {
   checkAnchorTension,
   checkDeflection,
   checkFlangeLocalBending,
+  flangeLocalBendingUtilisation,
   checkJunctionRingCompression,
   checkPatchLoading,
   checkRingInPlaneBuckling,
@@ -170,11 +171,21 @@ function patchLoadingChecks(section: SteelSection, grade: SteelGrade, spec: BinS
  */
 function flangeBendingChecks(section: SteelSection, grade: SteelGrade, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
   const halfWidth = section.dimensions.flangeWidth / 2;
+  const inputOf = (point: BearingPoint) => ({ lineLoad: point.force / point.tributaryLength, distanceFromWebCentre: Math.min(Math.abs(point.across), halfWidth) });
+  // Scan the points by utilisation alone; report only the worst (the first of equals, as keepWorst keeps).
+  let governing: BearingPoint | undefined;
+  let largest = -1;
   for (const point of bearingPoints(item.model, item.analysis)) {
     if (point.force === 0 || point.tributaryLength <= 0) continue;
-    const check = checkFlangeLocalBending(section, grade, { lineLoad: point.force / point.tributaryLength, distanceFromWebCentre: Math.min(Math.abs(point.across), halfWidth) });
-    keepWorst(worst, { ...check, inputs: { ...check.inputs, F: point.force, l_trib: point.tributaryLength } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, point.node));
+    const utilisation = flangeLocalBendingUtilisation(section, grade, inputOf(point));
+    if (utilisation > largest) {
+      largest = utilisation;
+      governing = point;
+    }
   }
+  if (!governing) return;
+  const check = checkFlangeLocalBending(section, grade, inputOf(governing));
+  keepWorst(worst, { ...check, inputs: { ...check.inputs, F: governing.force, l_trib: governing.tributaryLength } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, governing.node));
 }
 
 /**

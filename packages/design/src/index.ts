@@ -7,4 +7,4 @@ export { buildRingModel, type RingLayout, type RingModelInput } from './ring.js'
 export { TOOL_NAME, TOOL_VERSION } from './version.js';
 export { analyseModelFile, girderModelDocument, GIRDER_MODEL_SCHEMA_VERSION, type GirderModelDocument, type ModelFileResult } from './model-file.js';
 export { loadsReport, sectionCatalogue, listedSectionFamilies, LOADS_SCHEMA_VERSION, type LoadsReport } from './catalogue.js';
-export { designOption, compareReport, compareShard, mergeShards, shardCases, optionsDigest, COMPARE_SCHEMA_VERSION, CAPACITY_HEIGHT_STEP, type CompareRow, type CompareResult, type CompareShard } from './compare.js';
+export { designOption, prepareOption, binVolume, compareReport, compareShard, mergeShards, shardCases, optionsDigest, COMPARE_SCHEMA_VERSION, CAPACITY_HEIGHT_STEP, type CompareRow, type CompareResult, type CompareShard } from './compare.js';

@@ -32,8 +32,22 @@ export interface AnalysisOptions {
   contactTolerance?: number;
 }
 
+/** The assembled loads of one load case with factor 1 (loads are linear in the factors). */
+interface CaseLoads {
+  /** Total load per global slot. */
+  F: Float64Array;
+  /** Local uniform force q and moment m per element, 3 components each, and consistent loads fe, 14 each. */
+  q: Float64Array;
+  m: Float64Array;
+  fe: Float64Array;
+  /** Resultant force of the case, N, global. */
+  force: Vec3;
+}
+
 interface PreparedAnalysis {
   numbering: EquationNumbering;
+  /** Assembled loads per load case, filled on first use and shared by the combinations. */
+  caseLoads: Map<string, CaseLoads>;
   elements: PreparedElement[];
   /** ke and T of each element as row-major 14×14 arrays (recovery runs per element per combination). */
   keFlat: Float64Array[];
@@ -68,12 +82,59 @@ function prepare(model: GirderModel): PreparedAnalysis {
   const system = prepareContactSystem(model, numbering, elements, springs, describer(model, numbering));
   return {
     numbering,
+    caseLoads: new Map(),
     elements,
     keFlat: elements.map((element) => element.ke),
     TFlat: elements.map((element) => element.T),
     springs,
     system,
   };
+}
+
+/** The loads of one case with factor 1, assembled once per analysis set. */
+function caseLoadsOf(model: GirderModel, prepared: PreparedAnalysis, name: string): CaseLoads {
+  let loads = prepared.caseLoads.get(name);
+  if (!loads) {
+    const combined = combineLoads(model, { name, factors: { [name]: 1 } });
+    const assembled = assembleLoads(prepared.elements, combined.elements, combined.nodal, prepared.numbering);
+    const count = prepared.elements.length;
+    loads = { F: assembled.F, q: new Float64Array(3 * count), m: new Float64Array(3 * count), fe: new Float64Array(14 * count), force: resultantOfLoads(model, combined).force };
+    for (let i = 0; i < count; i++) {
+      const local = assembled.local[i] as { q: Vec3; m: Vec3; fe: Float64Array };
+      for (let k = 0; k < 3; k++) {
+        loads.q[3 * i + k] = local.q[k] as number;
+        loads.m[3 * i + k] = local.m[k] as number;
+      }
+      loads.fe.set(local.fe, 14 * i);
+    }
+    prepared.caseLoads.set(name, loads);
+  }
+  return loads;
+}
+
+/**
+ * The loads of a combination as the factored sum of the assembled loads of its cases (in the order
+ * of the model's load cases). Assembly is linear in the loads, so this equals assembling the
+ * combined loads, to rounding; each case is assembled once for all the combinations of a call.
+ */
+function combinationLoads(model: GirderModel, prepared: PreparedAnalysis, combination: Combination): CaseLoads & { f: Float64Array } {
+  const { numbering } = prepared;
+  const count = prepared.elements.length;
+  const sum: CaseLoads = { F: new Float64Array(numbering.slotCount), q: new Float64Array(3 * count), m: new Float64Array(3 * count), fe: new Float64Array(14 * count), force: [0, 0, 0] };
+  for (const loadCase of model.loadCases) {
+    const factor = combination.factors[loadCase.name] ?? 0;
+    if (factor === 0) continue;
+    const part = caseLoadsOf(model, prepared, loadCase.name);
+    for (let k = 0; k < sum.F.length; k++) sum.F[k] = (sum.F[k] as number) + factor * (part.F[k] as number);
+    for (let k = 0; k < sum.q.length; k++) {
+      sum.q[k] = (sum.q[k] as number) + factor * (part.q[k] as number);
+      sum.m[k] = (sum.m[k] as number) + factor * (part.m[k] as number);
+    }
+    for (let k = 0; k < sum.fe.length; k++) sum.fe[k] = (sum.fe[k] as number) + factor * (part.fe[k] as number);
+    for (let k = 0; k < 3; k++) sum.force[k] = (sum.force[k] as number) + factor * (part.force[k] as number);
+  }
+  const f = Float64Array.from(numbering.equationSlot, (slot) => sum.F[slot] as number);
+  return { ...sum, f };
 }
 
 function checkOptions(options: AnalysisOptions): number {
@@ -104,8 +165,7 @@ const STATE_NAMES = { [OPEN]: 'open', [ELASTIC]: 'elastic', [AT_CAPACITY]: 'at-c
 function analyseOne(model: GirderModel, prepared: PreparedAnalysis, combination: Combination, stationCount: number, options: AnalysisOptions): AnalysisResult {
   validateCombination(model, combination);
   const { numbering, elements, springs, system } = prepared;
-  const combined = combineLoads(model, combination);
-  const loads = assembleLoads(elements, combined.elements, combined.nodal, numbering);
+  const loads = combinationLoads(model, prepared, combination);
 
   const contactOptions: ContactOptions = {};
   if (options.maxContactIterations !== undefined) contactOptions.maxIterations = options.maxContactIterations;
@@ -130,7 +190,11 @@ function analyseOne(model: GirderModel, prepared: PreparedAnalysis, combination:
   const d = new Float64Array(14);
   const p = new Float64Array(14);
   elements.forEach((element, i) => {
-    const local = loads.local[i] as { q: Vec3; m: Vec3; fe: Float64Array };
+    const local = {
+      q: [loads.q[3 * i] as number, loads.q[3 * i + 1] as number, loads.q[3 * i + 2] as number] as Vec3,
+      m: [loads.m[3 * i] as number, loads.m[3 * i + 1] as number, loads.m[3 * i + 2] as number] as Vec3,
+      fe: loads.fe.subarray(14 * i, 14 * i + 14),
+    };
     const T = prepared.TFlat[i] as Float64Array;
     const ke = prepared.keFlat[i] as Float64Array;
     for (let a = 0; a < 14; a++) D[a] = U[element.slots[a] as number] as number;
@@ -151,9 +215,7 @@ function analyseOne(model: GirderModel, prepared: PreparedAnalysis, combination:
       const slot = element.slots[a] as number;
       imbalance[slot] = (imbalance[slot] as number) + s;
     }
-    for (const r of resultantsAlong(element.section, element.length, p, local.q, local.m, xsOf(element.length))) {
-      stations.push({ element: element.id, ...r });
-    }
+    for (const station of resultantsAlong(element.section, element.length, p, local.q, local.m, xsOf(element.length), element.id)) stations.push(station as Station);
   });
 
   const springForces: SpringForce[] = [];
@@ -201,7 +263,7 @@ function analyseOne(model: GirderModel, prepared: PreparedAnalysis, combination:
     displacements,
     reactions,
     springForces,
-    appliedSum: resultantOfLoads(model, combined).force,
+    appliedSum: loads.force,
     reactionSum,
     stations,
   };

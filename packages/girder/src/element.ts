@@ -256,6 +256,8 @@ export function resultantsAlong(
   q: Vec3,
   m: Vec3,
   xs: readonly number[],
+  /** When given, each station also names its element (first, as a Station of the results). */
+  element?: string,
 ): StationResultants[] {
   const N0 = -(p[0] as number);
   const Vy0 = -(p[1] as number);
@@ -272,17 +274,14 @@ export function resultantsAlong(
     const T = T0 - mx * x;
     const warping = bimomentAt(x, L, lambda, B0, BL, mx);
     const Tw = -warping.dB;
-    return {
-      x,
-      N: N0 - qx * x,
-      Vy: Vy0 - qy * x,
-      Vz: Vz0 - qz * x,
-      T,
-      Tsv: T - Tw,
-      Tw,
-      My: My0 + Vz0 * x - (qz * x * x) / 2 - my * x,
-      Mz: Mz0 - Vy0 * x + (qy * x * x) / 2 - mz * x,
-      B: warping.B,
-    };
+    const N = N0 - qx * x;
+    const Vy = Vy0 - qy * x;
+    const Vz = Vz0 - qz * x;
+    const My = My0 + Vz0 * x - (qz * x * x) / 2 - my * x;
+    const Mz = Mz0 - Vy0 * x + (qy * x * x) / 2 - mz * x;
+    // One object literal per shape (with or without the element's id first), built whole.
+    return element === undefined
+      ? { x, N, Vy, Vz, T, Tsv: T - Tw, Tw, My, Mz, B: warping.B }
+      : { element, x, N, Vy, Vz, T, Tsv: T - Tw, Tw, My, Mz, B: warping.B };
   });
 }

@@ -116,7 +116,8 @@ export interface FlangeContactInput {
  * Per unit length along the girder; no spread along the girder is assumed, which is conservative for
  * a short bearing. The resultant must lie on the flange (d <= b/2).
  */
-export function checkFlangeLocalBending(section: ClassifiableSection, grade: SteelGrade, input: FlangeContactInput): CheckResult {
+/** The quantities of checkFlangeLocalBending (shared with flangeLocalBendingUtilisation). */
+function flangeLocalBending(section: ClassifiableSection, grade: SteelGrade, input: FlangeContactInput) {
   const q = nonNegative('lineLoad', Math.abs(input.lineLoad));
   const d = nonNegative('distanceFromWebCentre', input.distanceFromWebCentre);
   const { flangeWidth: b, webThickness: tw, flangeThickness: tf, rootRadius: r } = section.dimensions;
@@ -128,6 +129,17 @@ export function checkFlangeLocalBending(section: ClassifiableSection, grade: Ste
   const fy = strengthsForThickness(grade, tf).yieldStrength;
   const mEd = q * lever;
   const mRd = (tf ** 2 * fy) / (4 * grade.gammaM0);
+  return { q, d, b, tw, tf, r, lever, fy, mEd, mRd };
+}
+
+/** The utilisation of checkFlangeLocalBending alone, without its report (for scanning many bearing points). */
+export function flangeLocalBendingUtilisation(section: ClassifiableSection, grade: SteelGrade, input: FlangeContactInput): number {
+  const { mEd, mRd } = flangeLocalBending(section, grade, input);
+  return ratio(mEd, mRd);
+}
+
+export function checkFlangeLocalBending(section: ClassifiableSection, grade: SteelGrade, input: FlangeContactInput): CheckResult {
+  const { q, d, b, tw, tf, r, lever, fy, mEd, mRd } = flangeLocalBending(section, grade, input);
   return {
     id: 'flange-local-bending',
     title: 'Local bending of the flange outstand under contact (cantilever from the web root)',
