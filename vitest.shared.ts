@@ -4,7 +4,7 @@ import { defineConfig } from 'vitest/config';
 
 export const sourceCondition = '@binsupport/source';
 
-export function projectTestConfig(options: { include?: string[]; testTimeout?: number } = {}) {
+export function projectTestConfig(options: { include?: string[]; testTimeout?: number; maxWorkers?: number } = {}) {
   return defineConfig({
     resolve: { conditions: [sourceCondition, 'module', 'node', 'default'] },
     ssr: { resolve: { conditions: [sourceCondition, 'node', 'default'], externalConditions: [sourceCondition] } },
@@ -14,6 +14,7 @@ export function projectTestConfig(options: { include?: string[]; testTimeout?: n
       testTimeout: options.testTimeout ?? 60_000,
       hookTimeout: options.testTimeout ?? 60_000,
       pool: 'forks',
+      ...(options.maxWorkers !== undefined ? { maxWorkers: options.maxWorkers } : {}),
       reporters: ['default'],
     },
   });

@@ -2,7 +2,7 @@ import { mkdir } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
 import { analyseModelFile, designFromSpec, DesignError, stableJson, type ModelFileResult } from '@binsupport/design';
-import { atomicWrite, writeDesignPdf, writeDesignXlsx } from '@binsupport/deliverables';
+import { atomicWrite, outputPath, writeDesignPdf, writeDesignXlsx } from '@binsupport/deliverables';
 import { readGirderModelFile, readSpecFile, SpecError, writeSpecTemplate } from '@binsupport/spec';
 import { runLoads, runMaterials, runSections } from './catalogue-commands.js';
 import { runCompare } from './compare-command.js';
@@ -99,11 +99,11 @@ async function runDesign(args: string[], streams: CliStreams): Promise<number> {
     const outcome = await designFromSpec(spec, { progress });
     await mkdir(outDir, { recursive: true });
     for (const { scenario, model } of outcome.models) {
-      await atomicWrite(join(outDir, `model-${scenario}.json`), stableJson(model));
+      await atomicWrite(outputPath(outDir, `model-${scenario}.json`), stableJson(model));
     }
-    await atomicWrite(join(outDir, 'design.json'), stableJson(outcome.result));
-    await writeDesignXlsx(outcome.result, join(outDir, 'design.xlsx'));
-    await writeDesignPdf(outcome.result, join(outDir, 'design.pdf'));
+    await atomicWrite(outputPath(outDir, 'design.json'), stableJson(outcome.result));
+    await writeDesignXlsx(outcome.result, outputPath(outDir, 'design.xlsx'));
+    await writeDesignPdf(outcome.result, outputPath(outDir, 'design.pdf'));
     progress(`wrote design.json, design.xlsx, design.pdf to ${outDir}`);
     for (const member of outcome.result.members) {
       streams.stdout.write(

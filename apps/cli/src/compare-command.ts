@@ -11,7 +11,7 @@ import { parseArgs } from 'node:util';
 import cliProgress from 'cli-progress';
 import { Piscina } from 'piscina';
 import { compareReport, compareShard, DesignError, mergeShards, optionsDigest, shardCases, stableJson, type CompareResult, type CompareRow } from '@binsupport/design';
-import { atomicWrite, writeComparePdf, writeCompareXlsx } from '@binsupport/deliverables';
+import { atomicWrite, outputPath, writeComparePdf, writeCompareXlsx } from '@binsupport/deliverables';
 import { readOptionsFile, SpecError, type OptionCase } from '@binsupport/spec';
 import type { CliStreams } from './cli.js';
 
@@ -132,9 +132,9 @@ export async function designOnPool(cases: readonly OptionCase[], workers: number
 async function writeComparison(result: CompareResult, outDir: string): Promise<void> {
   await mkdir(outDir, { recursive: true });
   // Rendered and written one by one, each atomically: a failure leaves earlier files of a previous run whole.
-  await atomicWrite(join(outDir, 'compare.json'), stableJson(result));
-  await writeCompareXlsx(result, join(outDir, 'compare.xlsx'));
-  await writeComparePdf(result, join(outDir, 'compare.pdf'));
+  await atomicWrite(outputPath(outDir, 'compare.json'), stableJson(result));
+  await writeCompareXlsx(result, outputPath(outDir, 'compare.xlsx'));
+  await writeComparePdf(result, outputPath(outDir, 'compare.pdf'));
 }
 
 function report(streams: CliStreams, result: CompareResult, outDir: string): number {
@@ -214,7 +214,7 @@ export async function runCompare(args: string[], streams: CliStreams): Promise<n
     if (shard) {
       await mkdir(outDir, { recursive: true });
       const name = `compare-shard-${shard.index}-of-${shard.count}.json`;
-      await atomicWrite(join(outDir, name), stableJson(compareShard(meta, shard, rows)));
+      await atomicWrite(outputPath(outDir, name), stableJson(compareShard(meta, shard, rows)));
       streams.stdout.write(`shard ${shard.index}/${shard.count}: ${rows.length} options; wrote ${name} to ${outDir}; join the shards with 'binsupport compare --merge'\n`);
       return EXIT_OK;
     }

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { DesignResult } from '@binsupport/design';
-import { atomicWrite, tempPathFor } from './atomic-write.js';
+import { atomicWrite, outputPath, tempPathFor } from './atomic-write.js';
 import { writeDesignPdf } from './pdf-report.js';
 import { writeDesignXlsx } from './xlsx-report.js';
 import { demoDesignResult } from './test-support/demo-result.js';
@@ -83,5 +83,18 @@ describe('writing the deliverables', () => {
     expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     expect(bytes.subarray(-6).toString('latin1')).toMatch(/%%EOF\s*$/);
     expect(await readdir(folder)).toEqual(['design.pdf']);
+  });
+});
+
+describe('outputPath', () => {
+  it('places a plain file name in the output folder', () => {
+    expect(outputPath('/out/run', 'design.json')).toBe('/out/run/design.json');
+    expect(outputPath('/', 'compare.json')).toBe('/compare.json');
+  });
+
+  it('refuses a name that would leave the folder, hide itself or carry control characters', () => {
+    for (const name of ['../design.json', '/etc/passwd', 'sub/design.json', '..', '.hidden', '', 'a\\b.json', 'line\nbreak.json']) {
+      expect(() => outputPath('/out/run', name), JSON.stringify(name)).toThrow(/refusing the output file name/);
+    }
   });
 });

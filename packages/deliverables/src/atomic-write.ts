@@ -5,7 +5,22 @@
 import { randomBytes } from 'node:crypto';
 import { rmSync } from 'node:fs';
 import { open, rename, rm } from 'node:fs/promises';
-import { basename, dirname, join } from 'node:path';
+import { basename, dirname, join, resolve } from 'node:path';
+
+/**
+ * The path of an output file `name` inside `folder`. A name is one plain file name: no folder part,
+ * no '..', not hidden, no control characters, so that no output can land outside the folder chosen
+ * by the user (whatever a name is built from).
+ */
+export function outputPath(folder: string, name: string): string {
+  // eslint-disable-next-line no-control-regex
+  if (name === '' || name !== basename(name) || name.includes('/') || name.includes('\\') || name.startsWith('.') || /[\u0000-\u001f]/.test(name)) {
+    throw new Error(`refusing the output file name '${name}': an output is a plain file name inside the output folder`);
+  }
+  const path = join(resolve(folder), name);
+  if (dirname(path) !== resolve(folder)) throw new Error(`refusing the output file name '${name}': it leaves the output folder`);
+  return path;
+}
 
 /** The temp-file name used for `path`: `<name>.tmp-<pid>-<random>` beside it. */
 export function tempPathFor(path: string): string {

@@ -1,4 +1,4 @@
-export { atomicWrite, abandonPendingWrites, WriteAbandonedError } from './atomic-write.js';
+export { atomicWrite, abandonPendingWrites, outputPath, WriteAbandonedError } from './atomic-write.js';
 export { renderDesignXlsx, writeDesignXlsx, DEFAULT_STEEL_PRICE_PER_TONNE, type WorkbookOptions } from './xlsx-report.js';
 export { renderDesignPdf, writeDesignPdf } from './pdf-report.js';
 export type { ReportOptions } from './report-data.js';

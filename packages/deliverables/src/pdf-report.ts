@@ -528,6 +528,7 @@ async function analysisSection(result: DesignResult): Promise<PdfContent[]> {
       result.analyses.map((analysis) => analysisRow(result, analysis)),
       [50, '*', 44, 40, 42, 52, 52, 50],
     ),
+    ...guardsTable(result),
   ];
   const combinations = result.loads.combinations.filter((c) => result.analyses.some((a) => a.combination === c.name && a.diagram !== undefined));
   let figure = 1;
@@ -549,6 +550,39 @@ async function analysisSection(result: DesignResult): Promise<PdfContent[]> {
   }
   content.push(...(await bearingSection(result, figure)));
   return content;
+}
+
+/** What the guards measured: each would have stopped the design instead of giving this report. */
+function guardsTable(result: DesignResult): PdfContent[] {
+  const guards = result.guards;
+  if (!guards) return [];
+  const mesh = guards.meshConvergence;
+  const rows: PdfContent[][] = [
+    ['Equilibrium', `reactions against applied loads in ${guards.equilibrium.analyses} analyses`, numberCell(formatResidual(guards.equilibrium.largestImbalance)), numberCell(formatResidual(guards.equilibrium.tolerance))],
+    [
+      'Contact consistency',
+      `${guards.contact.compressionOnlySprings} compression-only bearing states: none pulls, none lifted off is pressed in (relative to the largest force / elongation)`,
+      numberCell(formatResidual(Math.max(guards.contact.largestTension, guards.contact.largestPenetration))),
+      numberCell(formatResidual(guards.contact.tolerance)),
+    ],
+    [
+      'Re-analysis',
+      `the chosen sections analysed afresh: girder ${formatUtilisation(guards.reanalysis.freshGirderUtilisation)}${guards.reanalysis.freshColumnUtilisation === null ? '' : `, columns ${formatUtilisation(guards.reanalysis.freshColumnUtilisation)}`}, as reported`,
+      numberCell(formatResidual(guards.reanalysis.relativeDifference)),
+      numberCell(formatResidual(guards.reanalysis.tolerance)),
+    ],
+    [
+      'Mesh convergence',
+      `${mesh.check} in ${mesh.combination} / ${mesh.scenario}: ${mesh.utilisation === null ? "n/a" : formatNumber(mesh.utilisation)} with ${mesh.segmentsPerSpan} segments per span, ${mesh.refinedUtilisation === null ? "n/a" : formatNumber(mesh.refinedUtilisation)} with ${mesh.refinedSegmentsPerSpan}`,
+      numberCell(`${(100 * mesh.relativeChange).toFixed(2)} %`),
+      numberCell(`${(100 * mesh.tolerance).toFixed(0)} %`),
+    ],
+  ];
+  return [
+    subheading('Guards'),
+    paragraph('Each guard would have stopped the design with its reason instead of giving this report; what each measured:'),
+    table([headerCell('Guard'), headerCell('What was compared'), headerCell('Measured', 'right'), headerCell('Limit', 'right')], rows, [80, '*', 50, 40]),
+  ];
 }
 
 function percent(fraction: number): string {

@@ -8,10 +8,11 @@ import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisatio
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
 import { columnChecks, columnDemands, type ColumnDemand } from './columns.js';
 import { bearingPoints, DEFAULT_SERVICEABILITY, displacementChecks, forceChecks, settlementOf, type AnalysedCase, type ServiceabilityLimits } from './girder-checks.js';
-import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
+import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type GuardReport, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
 import { SCENARIOS, scenarioSummary, type ScenarioDefinition } from './scenarios.js';
 import { girderModelDocument, type GirderModelDocument } from './model-file.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
+import { contactGuard, meshGuard, reanalysisGuard } from './guards.js';
 
 export const CAUTIONS = [
   'This is a first-pass design produced by software. It must be checked and verified by a qualified structural engineer before it is used for construction.',
@@ -261,7 +262,7 @@ export interface DesignOutcome {
   models: Array<{ scenario: string; model: GirderModelDocument }>;
 }
 
-export const familyToSeries: Record<BinSpec['support']['sectionFamilies'][number], SteelSection['series']> = { IPE: 'IPE', HEB: 'HE B' };
+export const familyToSeries: Record<BinSpec['support']['sectionFamilies'][number], SteelSection['series']> = { IPE: 'IPE', HEA: 'HE A', HEB: 'HE B', HEM: 'HE M' };
 
 const MEMBER_ID = 'RG';
 const COLUMN_MEMBER_ID = 'C';
@@ -328,14 +329,17 @@ export function loadsFor(spec: BinSpec): LoadSet {
 }
 
 /** Check the equilibrium of one analysis: reactions balance the applied loads (guard). */
-function guardEquilibrium(analysis: AnalysisResult, scenario: string): void {
+function guardEquilibrium(analysis: AnalysisResult, scenario: string): number {
   const scale = Math.max(...analysis.appliedSum.map(Math.abs), 1);
+  let largest = 0;
   for (let i = 0; i < 3; i++) {
     const imbalance = Math.abs((analysis.reactionSum[i] ?? 0) + (analysis.appliedSum[i] ?? 0));
+    largest = Math.max(largest, imbalance / scale);
     if (imbalance > RELATIVE_EQUILIBRIUM_TOLERANCE * scale) {
       throw new DesignError('GUARD_FAILED', `equilibrium guard: in ${analysis.combination} / ${scenario} the reactions do not balance the loads along ${'XYZ'[i]} (imbalance ${imbalance.toExponential(3)} N of ${scale.toExponential(3)} N)`);
     }
   }
+  return largest;
 }
 
 /**
@@ -424,13 +428,40 @@ export function analyseScenario(context: DesignContext, section: SteelSection, s
     // the set-up and the factorisations of repeated contact states are shared.
     analyses = analyseAll(model, combinations.map((combination) => ({ name: combination.name, factors: combination.factors })), { stationsPerElement: context.stationsPerElement });
   } catch (error) {
-    if (error instanceof GirderError) {
-      throw new DesignError('ANALYSIS_FAILED', `analysis under ${scenario.id} with ${section.designation} refused: ${error.message}`);
-    }
+    if (error instanceof GirderError) throw analysisRefusal(model, combinations, scenario, section, error, context.stationsPerElement);
     throw error;
   }
   for (const analysis of analyses) guardEquilibrium(analysis, scenario.id);
   return { scenario, model, analyses };
+}
+
+/**
+ * The refusal of an analysis, naming the combination that failed (found by analysing the
+ * combinations one by one, on this failure path only) and, for a lift-off under an EQU combination,
+ * what the bin needs: the empty bin overturns or lifts off its bearings.
+ */
+function analysisRefusal(model: GirderModel, combinations: LoadSet['combinations'], scenario: ScenarioDefinition, section: SteelSection, error: GirderError, stationsPerElement: number): DesignError {
+  let failing: LoadSet['combinations'][number] | undefined;
+  for (const combination of combinations) {
+    try {
+      analyseAll(model, [{ name: combination.name, factors: combination.factors }], { stationsPerElement });
+    } catch (caught) {
+      if (caught instanceof GirderError) {
+        failing = combination;
+        break;
+      }
+      throw caught;
+    }
+  }
+  const where = failing ? ` in ${failing.name} (${failing.expression})` : '';
+  const liftOff = /lifted off|lifts the girder/.test(error.message);
+  const equilibrium = failing?.verification === 'EQU' ? ' (static equilibrium, EN 1990 6.4.1 EQU)' : '';
+  const advice = !liftOff
+    ? ''
+    : scenario.supportType === 'ring-on-slab'
+      ? `: under this combination the bin lifts off its bearing${equilibrium}; it must be held down (support.anchorCapacity with the slab-anchored scenario) or be heavier`
+      : `: under this combination the bin lifts off its column caps${equilibrium}; the caps need holding-down bolts, which this tool does not model (docs/limits.md)`;
+  return new DesignError('ANALYSIS_FAILED', `analysis under ${scenario.id} with ${section.designation}${where} refused: ${error.message}${advice}`);
 }
 
 function ulsStations(context: DesignContext, scenarios: ScenarioAnalysis[]): StationSet[] {
@@ -765,6 +796,10 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     ]),
   );
   for (const scenario of allScenarios) guardLoadTotals(final.section, scenario, loads, girderLength);
+  const guards = designGuards(context, { section: final.section, grade, column: finalColumn, credible, allScenarios, governing, finalUtilisation, columnUtilisation: finalColumn ? maxUtilisation(finalColumnEnvelopes) : null });
+  progress(
+    `guards: equilibrium and contact hold in ${guards.contact.analyses} analyses; a fresh re-analysis agrees (difference ${guards.reanalysis.relativeDifference.toExponential(1)}); with ${guards.meshConvergence.refinedSegmentsPerSpan} segments per span the governing ${guards.meshConvergence.check} changes by ${(100 * guards.meshConvergence.relativeChange).toFixed(2)} %`,
+  );
   const member: MemberResult = {
     id: MEMBER_ID,
     description: layout.kind === 'slab' ? `ring girder bearing on a slab, centroid radius ${layout.radius.toFixed(3)} m` : `ring girder on ${layout.columns} columns, centroid radius ${layout.radius.toFixed(3)} m`,
@@ -913,6 +948,7 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
       ...(columnStiffness ? { columnStiffness } : {}),
     },
     totals: { steelMass },
+    guards,
     serviceability: { combinations: [...slsNames], deflectionLimitRatio: context.serviceability.deflectionLimitRatio, twistLimit: context.serviceability.twistLimit, maxSettlement: settlement },
   };
   progress(`${message}${stiffnessNote}`);
@@ -946,6 +982,43 @@ function bearingSummary(model: GirderModel, analysis: AnalysisResult): Pick<Anal
       mostLoadedColumn: mostLoaded,
     },
   };
+}
+
+/**
+ * The guards of a finished design (guards.ts): equilibrium and contact consistency over every
+ * reported analysis, a fresh re-analysis of the chosen sections from a new context (no cache shared),
+ * and the governing check on a mesh with twice the segments. Each throws when it fails.
+ */
+function designGuards(
+  context: DesignContext,
+  final: { section: SteelSection; grade: SteelGrade; column: SteelSection | undefined; credible: ScenarioDefinition[]; allScenarios: ScenarioAnalysis[]; governing: CheckEnvelope; finalUtilisation: number; columnUtilisation: number | null },
+): GuardReport {
+  const { spec, layout } = context;
+  const items = final.allScenarios.flatMap(({ scenario, model, analyses }) => analyses.map((analysis) => ({ scenario: scenario.id, model, analysis })));
+  const equilibrium = { analyses: items.length, largestImbalance: Math.max(0, ...items.map(({ scenario, analysis }) => guardEquilibrium(analysis, scenario))), tolerance: RELATIVE_EQUILIBRIUM_TOLERANCE };
+  const contact = contactGuard(items);
+
+  const fresh: DesignContext = { ...designContext(spec, context.stationsPerElement, context.serviceability), column: context.column };
+  const again = analyseSection(fresh, final.section, final.credible);
+  const girderAgain = maxUtilisation(final.grade.name === fresh.grade.name ? again.envelopes : sectionEnvelopes(fresh, final.section, final.grade, again.scenarios));
+  const columnAgain = final.column
+    ? maxUtilisation(columnChecks(final.column, final.grade, spec.support.columnHeight, governingDemands(columnDemands(fresh.loads, fresh.layout, casesOf(again.scenarios, sizingCombinations(fresh.loads))))))
+    : null;
+  const reanalysis = reanalysisGuard({ girder: final.finalUtilisation, column: final.columnUtilisation }, { girder: girderAgain, column: columnAgain });
+
+  const scenario = final.credible.find((entry) => entry.id === final.governing.scenario);
+  if (!scenario) throw new DesignError('GUARD_FAILED', `mesh-convergence guard: the governing scenario ${final.governing.scenario} is not a credible one`);
+  const meshConvergence = meshGuard(
+    final.governing,
+    layout.segmentsPerSpan,
+    (segmentsPerSpan) => {
+      const refined: DesignContext = { ...context, layout: { ...layout, segmentsPerSpan } };
+      const analysed = analyseScenario(refined, final.section, scenario, new Set([final.governing.combination]));
+      return sectionEnvelopes(refined, final.section, final.grade, [analysed]);
+    },
+    { section: final.section, grade: final.grade },
+  );
+  return { equilibrium, contact, reanalysis, meshConvergence };
 }
 
 function finiteOrNull(value: number): number | null {

@@ -286,4 +286,29 @@ export interface DesignResult {
   /** Total steel mass of all member groups (girder and columns), kg. */
   totals: { steelMass: number };
   serviceability?: ServiceabilitySummary;
+  /** What the guards measured; a guard that fails stops the design instead (no result is written). */
+  guards?: GuardReport;
+}
+
+/** The guards of the design (guards.ts) and what each measured. */
+export interface GuardReport {
+  /** Reactions against applied loads in every analysis, relative to the applied load. */
+  equilibrium: { analyses: number; largestImbalance: number; tolerance: number };
+  /** Compression-only bearings: tension or stretching in contact, and pressing while lifted off, relative to the analysis's largest force / elongation. */
+  contact: { analyses: number; compressionOnlySprings: number; largestTension: number; largestPenetration: number; tolerance: number };
+  /** The chosen design analysed afresh (nothing cached) against the utilisations reported. */
+  /** Utilisations are null when beyond a resistance or outside a check's scope (as elsewhere in design.json). */
+  reanalysis: { girderUtilisation: number | null; freshGirderUtilisation: number | null; columnUtilisation: number | null; freshColumnUtilisation: number | null; relativeDifference: number; tolerance: number };
+  /** The governing check of the girder with twice the segments per span. */
+  meshConvergence: {
+    check: string;
+    combination: string;
+    scenario: string;
+    segmentsPerSpan: number;
+    refinedSegmentsPerSpan: number;
+    utilisation: number | null;
+    refinedUtilisation: number | null;
+    relativeChange: number;
+    tolerance: number;
+  };
 }

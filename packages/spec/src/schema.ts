@@ -44,7 +44,7 @@ function choice<const T extends readonly [string, ...string[]]>(values: T) {
 }
 
 export const steelGrades = ['S235', 'S275', 'S355', 'S460'] as const;
-export const sectionFamilies = ['IPE', 'HEB'] as const;
+export const sectionFamilies = ['IPE', 'HEA', 'HEB', 'HEM'] as const;
 export const wallSurfaceCategories = ['D1', 'D2', 'D3'] as const;
 /** Support scenarios of a ring on columns (docs/input-reference.md, "Support scenarios"). */
 export const supportScenarios = ['column-cap-contact', 'column-cap-bonded', 'columns-under-web', 'slab-contact', 'slab-bonded', 'slab-web-line', 'slab-inner-edge-line', 'slab-anchored'] as const;

@@ -143,6 +143,13 @@ describe('support types', () => {
     expect(errorOf({ ...minimal, support: { columns: 8, credibleScenarios: ['slab-contact'] } }).message).toBe("support.credibleScenarios[0] 'slab-contact' does not apply to support.type ring-on-columns");
     expect(errorOf({ ...minimal, support: { type: 'ring-on-slab', credibleScenarios: ['slab-anchored'] } }).path).toBe('support.anchorCapacity');
   });
+
+  it('limits the girder model to 2880 segments, naming the input and the largest count per span', () => {
+    expect(normaliseSpec({ ...minimal, support: { columns: 24, segmentsPerSpan: 120 } }).support.segmentsPerSpan).toBe(120);
+    const error = errorOf({ ...minimal, support: { columns: 36, segmentsPerSpan: 120 } });
+    expect(error.path).toBe('support.segmentsPerSpan');
+    expect(error.message).toBe('support.segmentsPerSpan gives 36 x 120 = 4320 girder segments; at most 2880 (a whole number of segments per span between 2 and 80 for 36 columns)');
+  });
 });
 
 describe('YAML that is not plain data', () => {

@@ -40,7 +40,7 @@ export interface BinSpec {
     girderDiameter: number;
     segmentsPerSpan: number;
     grade: 'S235' | 'S275' | 'S355' | 'S460';
-    sectionFamilies: Array<'IPE' | 'HEB'>;
+    sectionFamilies: Array<'IPE' | 'HEA' | 'HEB' | 'HEM'>;
     /** Rolled section of the columns (EN 10365 designation), for the cap bearing stiffness. */
     columnSection: string;
     columnHeight: number;
@@ -72,6 +72,9 @@ export interface BinSpec {
   equipment: Array<{ name: string; angle: number; radius: number; force: number; kind: 'permanent' | 'variable' }>;
 }
 
+/** Largest number of straight segments of the ring girder model (columns x segments per span, or the slab's segments). */
+export const MAX_GIRDER_SEGMENTS = 2880;
+
 function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
   const issues: SpecIssue[] = [];
   const { bin } = parsed;
@@ -93,6 +96,14 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
   const support = parsed.support;
   if (support.type === 'ring-on-columns' && support.columns === undefined) {
     issues.push({ path: 'support.columns', message: 'support.columns is required for a ring on columns (a whole number of columns between 3 and 36)' });
+  }
+  // The girder model's size: a ring of more than MAX_GIRDER_SEGMENTS straight segments is refused
+  // (the mesh guard shows 24 per span converging; far finer meshes only cost time and memory).
+  if (support.type === 'ring-on-columns' && support.columns !== undefined && support.columns * support.segmentsPerSpan > MAX_GIRDER_SEGMENTS) {
+    issues.push({
+      path: 'support.segmentsPerSpan',
+      message: `support.segmentsPerSpan gives ${support.columns} x ${support.segmentsPerSpan} = ${support.columns * support.segmentsPerSpan} girder segments; at most ${MAX_GIRDER_SEGMENTS} (a whole number of segments per span between 2 and ${Math.floor(MAX_GIRDER_SEGMENTS / support.columns)} for ${support.columns} columns)`,
+    });
   }
   const ownPrefix = support.type === 'ring-on-slab' ? 'slab-' : 'column';
   for (const [index, scenario] of (support.credibleScenarios ?? []).entries()) {

@@ -1,0 +1,11 @@
+import { describe, expect, it } from 'vitest';
+import { designGeneratedBins, pipelineRuns } from './pipeline-property.js';
+
+// Half of the whole-pipeline fuzz cases (see pipeline-property.ts), seed 20261203.
+describe('whole pipeline on generated bins (b)', () => {
+  it(`designs ${pipelineRuns} generated specs: verified, reported infeasible, or refused with a reason; never a crash`, async () => {
+    const summary = await designGeneratedBins(pipelineRuns, 20261203);
+    console.log(summary);
+    expect(summary).toMatch(/generated bins/);
+  }, 900_000);
+});
