@@ -336,7 +336,16 @@ function guardEquilibrium(analysis: AnalysisResult, scenario: string): number {
     const imbalance = Math.abs((analysis.reactionSum[i] ?? 0) + (analysis.appliedSum[i] ?? 0));
     largest = Math.max(largest, imbalance / scale);
     if (imbalance > RELATIVE_EQUILIBRIUM_TOLERANCE * scale) {
-      throw new DesignError('GUARD_FAILED', `equilibrium guard: in ${analysis.combination} / ${scenario} the reactions do not balance the loads along ${'XYZ'[i]} (imbalance ${imbalance.toExponential(3)} N of ${scale.toExponential(3)} N)`);
+      // Out of balance with a small backward error: the stiffness of the contact state is nearly
+      // singular (a near-mechanism), typically a girder left on part of its bearings.
+      const springs = analysis.springForces.length;
+      const pressing = analysis.contact?.activeSprings.length ?? springs;
+      const largest = Math.max(0, ...analysis.displacements.map((node) => Math.max(Math.abs(node.ux), Math.abs(node.uy), Math.abs(node.uz))));
+      const contact = springs > 0 ? `, with ${pressing} of ${springs} bearing points pressing` : '';
+      throw new DesignError(
+        'GUARD_FAILED',
+        `equilibrium guard: in ${analysis.combination} / ${scenario} the reactions do not balance the loads along ${'XYZ'[i]} (imbalance ${imbalance.toExponential(3)} N of ${scale.toExponential(3)} N; largest displacement ${largest.toExponential(2)} m${contact}): the contact state is a near-mechanism and its solution cannot be trusted; if the bin lifts off under this combination it must be held down (anchors) or be heavier`,
+      );
     }
   }
   return largest;
@@ -454,7 +463,7 @@ function analysisRefusal(model: GirderModel, combinations: LoadSet['combinations
     }
   }
   const where = failing ? ` in ${failing.name} (${failing.expression})` : '';
-  const liftOff = /lifted off|lifts the girder/.test(error.message);
+  const liftOff = /lifted off|lifts the girder|lifting off its bearings/.test(error.message);
   const equilibrium = failing?.verification === 'EQU' ? ' (static equilibrium, EN 1990 6.4.1 EQU)' : '';
   const advice = !liftOff
     ? ''

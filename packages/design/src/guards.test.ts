@@ -79,3 +79,22 @@ describe('mesh-convergence guard', () => {
     expect(result.guards?.reanalysis.relativeDifference).toBe(0);
   });
 });
+
+describe('regression: a near-mechanism found by the whole-pipeline fuzz (seed 20261203)', () => {
+  // An invented, tall empty bin on a slab under wind (ULS-11: 1.00 G + ... + 1.50 W_0): the ring keeps
+  // a part of its bearings, the contact state is nearly singular and its solve passed the backward
+  // error test with displacements of 1e11 m, out of balance by 0.4 %. It must be refused, naming why.
+  it('is refused with the combination and the near-mechanism named, not designed', async () => {
+    const document = {
+      project: { name: 'Generated bin (invented, fuzz test)' },
+      bin: { diameter: 7.7, cylinderHeight: 22.37, wallThickness: 5, hopper: { apexHalfAngle: 37, outletDiameter: 0.2, thickness: 7 } },
+      solid: { name: 'soya-beans', wallSurface: 'D2' },
+      support: { type: 'ring-on-slab', segments: 96, grade: 'S275' },
+      roof: { deadLoad: 1, imposedLoad: 0.33, pitch: 20 },
+      snow: { groundLoad: 1.4 },
+      wind: { basicVelocity: 24, terrainCategory: 'III', supportLevelHeight: 3, directions: [0] },
+      equipment: [{ name: 'generated unit', angle: 16, radius: 3.46, force: 30 }],
+    };
+    await expect(designFromSpec(normaliseSpec(document))).rejects.toThrow(/ULS-11.*(near-mechanism|lifts off)/);
+  });
+});

@@ -15,7 +15,7 @@ const solids = ['wheat', 'maize', 'barley', 'sugar', 'soya-beans', 'cement-clink
 
 const round = (value: number, digits: number): number => Number(value.toFixed(digits));
 
-const specDocument = fc
+export const specDocument = fc
   .record({
     diameter: fc.double({ min: 3, max: 12, noNaN: true }),
     slenderness: fc.double({ min: 0.6, max: 3.5, noNaN: true }),
