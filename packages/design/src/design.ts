@@ -7,7 +7,7 @@ import { DesignError } from './errors.js';
 import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
 import { columnChecks, columnDemands, type ColumnDemand } from './columns.js';
-import { bearingPoints, DEFAULT_SERVICEABILITY, displacementChecks, forceChecks, settlementOf, type AnalysedCase, type ServiceabilityLimits } from './girder-checks.js';
+import { bearingPoints, bearingStiffenerMass, bearingStiffenerOf, DEFAULT_SERVICEABILITY, displacementChecks, forceChecks, settlementOf, type AnalysedCase, type ServiceabilityLimits } from './girder-checks.js';
 import { DESIGN_SCHEMA_VERSION, type AnalysisSummary, type GuardReport, type DesignResult, type ForceDiagram, type MemberResult, type OptimisationStep, type Position, type UtilisationRow } from './result.js';
 import { SCENARIOS, scenarioSummary, type ScenarioDefinition } from './scenarios.js';
 import { girderModelDocument, type GirderModelDocument } from './model-file.js';
@@ -100,7 +100,8 @@ function selectionSetup(context: DesignContext, options: DesignOptions, girderLe
   const costObjective = keysMatter || grades.some((grade) => price(grade) !== 1);
   const keyOf = (section: SteelSection, grade: SteelGrade): string => `${section.designation} ${grade.name}`;
   const gradeAttribute = (grade: SteelGrade): number => Math.round((grade.strengths[0]?.yieldStrength ?? 0) / 1e6);
-  const girderCost = (section: SteelSection, grade: SteelGrade): number => section.properties.massPerMetre * girderLength * price(grade);
+  // The girder's steel includes its bearing stiffeners, when the spec asks for them (their size follows the section).
+  const girderCost = (section: SteelSection, grade: SteelGrade): number => (section.properties.massPerMetre * girderLength + bearingStiffenerMass(section, spec, layout)) * price(grade);
   const columnCost = (section: SteelSection, grade: SteelGrade): number => section.properties.massPerMetre * columnLength * price(grade);
 
   const girderMemo = new Map<string, CheckEnvelope[]>();
@@ -224,13 +225,15 @@ function selectionSetup(context: DesignContext, options: DesignOptions, girderLe
     },
     /** The least objective any choice with this girder can have. */
     lowerBound: (section: SteelSection): number =>
-      section.properties.massPerMetre * girderLength * minPrice + (lightestColumn ? lightestColumn.properties.massPerMetre * columnLength * minPrice : 0) + costPerDistinctSection,
+      (section.properties.massPerMetre * girderLength + bearingStiffenerMass(section, spec, layout)) * minPrice + (lightestColumn ? lightestColumn.properties.massPerMetre * columnLength * minPrice : 0) + costPerDistinctSection,
     bestAttemptColumn: (entry: SectionAnalysis, grade: SteelGrade): SteelSection | undefined => {
       if (!hasColumns) return undefined;
       const ranked = columnCandidates.map((section) => ({ section, utilisation: columnUtilisation(entry, section, grade) }));
       return (ranked.find((option) => option.utilisation <= 1) ?? [...ranked].sort((a, b) => a.utilisation - b.utilisation)[0])?.section;
     },
-    objectiveOf: (members: Array<{ mass: number; key: string }>, grade: SteelGrade): number => members.reduce((sum, member) => sum + member.mass * price(grade), 0) + costPerDistinctSection * new Set(members.map((member) => member.key)).size,
+    /** Sum of mass x price over the members, plus the cost per distinct section of those that are rolled sections (keyed). */
+    objectiveOf: (members: Array<{ mass: number; key: string | undefined }>, grade: SteelGrade): number =>
+      members.reduce((sum, member) => sum + member.mass * price(grade), 0) + costPerDistinctSection * new Set(members.flatMap((member) => (member.key === undefined ? [] : [member.key]))).size,
   };
 }
 
@@ -266,6 +269,8 @@ export const familyToSeries: Record<BinSpec['support']['sectionFamilies'][number
 
 const MEMBER_ID = 'RG';
 const COLUMN_MEMBER_ID = 'C';
+/** The bearing stiffeners over the columns (a member of the result when the spec asks for them). */
+const STIFFENER_MEMBER_ID = 'ST';
 
 /**
  * Default price per kg of steel by grade, relative to S235 (the objective is then in kg of S235
@@ -809,6 +814,9 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
   progress(
     `guards: equilibrium and contact hold in ${guards.contact.analyses} analyses; a fresh re-analysis agrees (difference ${guards.reanalysis.relativeDifference.toExponential(1)}); with ${guards.meshConvergence.refinedSegmentsPerSpan} segments per span the governing ${guards.meshConvergence.check} changes by ${(100 * guards.meshConvergence.relativeChange).toFixed(2)} %`,
   );
+  // The girder member reports its own checks; those of the bearing stiffeners go to their member.
+  const girderOnly = finalEnvelopes.filter((envelope) => !envelope.check.id.startsWith('stiffener-'));
+  const girderGoverning = governingEnvelope(girderOnly) ?? governing;
   const member: MemberResult = {
     id: MEMBER_ID,
     description: layout.kind === 'slab' ? `ring girder bearing on a slab, centroid radius ${layout.radius.toFixed(3)} m` : `ring girder on ${layout.columns} columns, centroid radius ${layout.radius.toFixed(3)} m`,
@@ -817,16 +825,16 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     length: girderLength,
     mass: final.section.properties.massPerMetre * girderLength,
     massPerLength: final.section.properties.massPerMetre,
-    utilisation: finiteOrNull(finalUtilisation),
+    utilisation: finiteOrNull(maxUtilisation(girderOnly)),
     governing: {
-      check: governing.check.id,
-      title: governing.check.title,
-      clause: governing.check.clause,
-      combination: governing.combination,
-      scenario: governing.scenario,
-      position: positionFor(governing.station),
-      inputs: governing.check.inputs,
-      intermediate: governing.check.intermediate,
+      check: girderGoverning.check.id,
+      title: girderGoverning.check.title,
+      clause: girderGoverning.check.clause,
+      combination: girderGoverning.combination,
+      scenario: girderGoverning.scenario,
+      position: positionFor(girderGoverning.station),
+      inputs: girderGoverning.check.inputs,
+      intermediate: girderGoverning.check.intermediate,
     },
   };
   const rowOf = (memberId: string, section: SteelSection) => (envelope: CheckEnvelope): UtilisationRow => ({
@@ -844,7 +852,40 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     ...(envelope.check.outOfScope || envelope.check.notes ? { note: [envelope.check.outOfScope, ...(envelope.check.notes ?? [])].filter((text) => text !== undefined).join('; ') } : {}),
   });
   const members: MemberResult[] = [member];
-  const utilisations: UtilisationRow[] = finalEnvelopes.map(rowOf(MEMBER_ID, final.section));
+  const isStiffenerCheck = (envelope: CheckEnvelope): boolean => envelope.check.id.startsWith('stiffener-');
+  const utilisations: UtilisationRow[] = finalEnvelopes.filter((envelope) => !isStiffenerCheck(envelope)).map(rowOf(MEMBER_ID, final.section));
+  const stiffenerPair = bearingStiffenerOf(final.section, spec, layout);
+  if (stiffenerPair !== undefined) {
+    const stiffenerEnvelopes = finalEnvelopes.filter(isStiffenerCheck);
+    const stiffenerGoverning = governingEnvelope(stiffenerEnvelopes);
+    if (!stiffenerGoverning) throw new DesignError('ANALYSIS_FAILED', 'no check was evaluated for the bearing stiffeners');
+    const pair = stiffenerPair === 'too narrow' ? undefined : stiffenerPair;
+    const webDepth = final.section.dimensions.depth - 2 * final.section.dimensions.flangeThickness;
+    const stiffenerLength = layout.columns * 2 * webDepth;
+    const stiffenerMass = bearingStiffenerMass(final.section, spec, layout);
+    const plate = pair ? `FL ${(pair.thickness * 1000).toFixed(0)} x ${(pair.width * 1000).toFixed(0)}` : 'none fits';
+    members.push({
+      id: STIFFENER_MEMBER_ID,
+      description: `bearing stiffeners over the columns: a pair of plates ${plate} mm each side of the girder web at each of the ${layout.columns} columns, full web depth ${(webDepth * 1000).toFixed(0)} mm, chamfer ${((spec.support.bearingStiffeners?.chamfer ?? 0) * 1000).toFixed(0)} mm`,
+      section: plate,
+      grade: grade.name,
+      length: stiffenerLength,
+      mass: stiffenerMass,
+      massPerLength: stiffenerLength > 0 ? stiffenerMass / stiffenerLength : 0,
+      utilisation: finiteOrNull(maxUtilisation(stiffenerEnvelopes)),
+      governing: {
+        check: stiffenerGoverning.check.id,
+        title: stiffenerGoverning.check.title,
+        clause: stiffenerGoverning.check.clause,
+        combination: stiffenerGoverning.combination,
+        scenario: stiffenerGoverning.scenario,
+        position: { ...positionFor(stiffenerGoverning.station), description: `over column C${stiffenerGoverning.check.inputs['column'] ?? ''}` },
+        inputs: stiffenerGoverning.check.inputs,
+        intermediate: stiffenerGoverning.check.intermediate,
+      },
+    });
+    utilisations.push(...stiffenerEnvelopes.map((envelope) => ({ ...rowOf(STIFFENER_MEMBER_ID, final.section)(envelope), section: plate, position: { ...positionFor(envelope.station), description: `over column C${envelope.check.inputs['column'] ?? ''}` } })));
+  }
   if (finalColumn) {
     const columnGoverning = governingEnvelope(finalColumnEnvelopes);
     if (!columnGoverning) throw new DesignError('ANALYSIS_FAILED', 'no check was evaluated for the columns');
@@ -872,7 +913,7 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     utilisations.push(...finalColumnEnvelopes.map((envelope) => ({ ...rowOf(COLUMN_MEMBER_ID, finalColumn)(envelope), position: { ...positionFor(envelope.station), description: `column C${envelope.check.inputs['column'] ?? ''}` } })));
   }
   const steelMass = members.reduce((sum, entry) => sum + entry.mass, 0);
-  const objectiveValue = selection.objectiveOf(members.map((entry) => ({ mass: entry.mass, key: `${entry.section} ${entry.grade}` })), grade);
+  const objectiveValue = selection.objectiveOf(members.map((entry) => ({ mass: entry.mass, key: entry.id === STIFFENER_MEMBER_ID ? undefined : `${entry.section} ${entry.grade}` })), grade);
   // Force diagrams are kept for the governing combination of each scenario and the one with the
   // largest torsion (the others are summarised by their peaks; every one can be re-run with `analyse`).
   // Peaks and bearing state, once per reported analysis.

@@ -10,6 +10,7 @@ import type { BinSpec } from '@binsupport/spec';
 import {
   checkAnchorTension,
   checkDeflection,
+  checkBearingStiffeners,
   checkFlangeLocalBending,
   flangeLocalBendingUtilisation,
   checkJunctionRingCompression,
@@ -19,6 +20,7 @@ import {
   type CheckResult,
   type SteelGrade,
   type SteelSection,
+  type BearingStiffenerPair,
 } from '@binsupport/steel';
 import type { CheckEnvelope } from './evaluate.js';
 import type { RingLayout } from './ring.js';
@@ -162,6 +164,81 @@ function patchLoadingChecks(section: SteelSection, grade: SteelGrade, spec: BinS
   for (const column of columnReactions(item.model, item.analysis, layout)) {
     const check = checkPatchLoading(section, grade, { force: Math.max(0, column.force), stiffBearingLength: spec.support.capPlateLength, type: 'a' });
     keepWorst(worst, { ...check, inputs: { ...check.inputs, column: column.index + 1 } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, column.node));
+  }
+}
+
+/** Setback of a default bearing stiffener from the flange tip, m (common practice: 10 mm). */
+export const STIFFENER_TIP_SETBACK = 0.01;
+
+/**
+ * The bearing stiffener pair of a section over the column caps, from support.bearingStiffeners: the
+ * given width, or the flange outstand (b - t_w)/2 less STIFFENER_TIP_SETBACK. Undefined without
+ * stiffeners (or on a slab); 'too narrow' when the outstand leaves no bearing width past the chamfer.
+ */
+export function bearingStiffenerOf(section: SteelSection, spec: BinSpec, layout: RingLayout): BearingStiffenerPair | 'too narrow' | undefined {
+  const stiffeners = spec.support.bearingStiffeners;
+  if (!stiffeners || layout.kind === 'slab') return undefined;
+  const outstand = (section.dimensions.flangeWidth - section.dimensions.webThickness) / 2;
+  const width = stiffeners.width ?? outstand - STIFFENER_TIP_SETBACK;
+  if (width > outstand + 1e-9 || width <= stiffeners.chamfer) return 'too narrow';
+  return { width, thickness: stiffeners.thickness, chamfer: stiffeners.chamfer };
+}
+
+/** Steel of the bearing stiffeners of one girder: a pair over each column, full web depth, kg. */
+export function bearingStiffenerMass(section: SteelSection, spec: BinSpec, layout: RingLayout): number {
+  const pair = bearingStiffenerOf(section, spec, layout);
+  if (pair === undefined || pair === 'too narrow') return 0;
+  const webDepth = section.dimensions.depth - 2 * section.dimensions.flangeThickness;
+  return layout.columns * 2 * pair.width * pair.thickness * webDepth * spec.bin.steelDensity;
+}
+
+/**
+ * Bearing stiffeners over each column (EN 1993-1-5 9.1, 9.4): the cap's bearing points inside the
+ * web line load one stiffener, those outside the other, a point on the web line both equally; a point
+ * support under the web loads both equally.
+ */
+function stiffenerChecks(section: SteelSection, grade: SteelGrade, pair: BearingStiffenerPair | 'too narrow', layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  const points = bearingPoints(item.model, item.analysis);
+  for (const column of columnReactions(item.model, item.analysis, layout)) {
+    const station = stationAtNode(item.model, item.analysis, column.node);
+    if (pair === 'too narrow') {
+      const outstand = (section.dimensions.flangeWidth - section.dimensions.webThickness) / 2;
+      keepWorst(
+        worst,
+        {
+          id: 'stiffener-bearing',
+          title: 'Bearing stiffener: fitted end in bearing (each side)',
+          clause: 'EN 1993-1-5 9.1',
+          utilisation: Number.POSITIVE_INFINITY,
+          inputs: { column: column.index + 1, outstand },
+          intermediate: {},
+          outOfScope: `the flange outstand of ${section.designation} (${(outstand * 1000).toFixed(0)} mm) leaves no bearing width for a stiffener past its chamfer`,
+        },
+        item.analysis.combination,
+        item.scenario,
+        station,
+      );
+      continue;
+    }
+    const cap = points.filter((point) => point.node === column.node && point.id.includes('-cap-'));
+    let inside = 0;
+    let outside = 0;
+    if (cap.length === 0) {
+      inside = Math.max(0, column.force) / 2;
+      outside = inside;
+    }
+    for (const point of cap) {
+      const force = Math.max(0, point.force);
+      if (point.across < 0) inside += force;
+      else if (point.across > 0) outside += force;
+      else {
+        inside += force / 2;
+        outside += force / 2;
+      }
+    }
+    for (const check of checkBearingStiffeners(section, grade, pair, { sideA: inside, sideB: outside })) {
+      keepWorst(worst, { ...check, inputs: { ...check.inputs, column: column.index + 1 } }, item.analysis.combination, item.scenario, station);
+    }
   }
 }
 
@@ -328,8 +405,14 @@ export function forceChecks(context: GirderCheckContext, section: SteelSection, 
   const envelopes: CheckEnvelope[] = [];
   for (const item of cases) {
     const worst = new Map<string, CheckEnvelope>();
-    patchLoadingChecks(section, grade, context.spec, context.layout, item, worst);
-    flangeBendingChecks(section, grade, item, worst);
+    const stiffener = bearingStiffenerOf(section, context.spec, context.layout);
+    if (stiffener === undefined) {
+      patchLoadingChecks(section, grade, context.spec, context.layout, item, worst);
+      flangeBendingChecks(section, grade, item, worst);
+    } else {
+      // The reaction passes through the stiffeners, which also hold the flange outstand over the cap.
+      stiffenerChecks(section, grade, stiffener, context.layout, item, worst);
+    }
     ringChecks(section, grade, context.spec, context.loads, context.layout, item, worst);
     anchorChecks(context.spec, item, worst);
     envelopes.push(...worst.values());

@@ -109,6 +109,9 @@ export const binSpecInput = z.strictObject(
         columnSection: text(40).default('HE 200 B'),
         columnHeight: quantity({ min: 0.5, max: 40, unit: 'm' }).default(5),
         capPlateLength: quantity({ min: 50, max: 2000, unit: 'mm' }).default(300),
+        bearingStiffenerThickness: quantity({ min: 6, max: 50, unit: 'mm' }).optional(),
+        bearingStiffenerWidth: quantity({ min: 30, max: 500, unit: 'mm' }).optional(),
+        bearingStiffenerChamfer: quantity({ min: 0, max: 50, unit: 'mm' }).default(15),
         bearingPoints: wholeNumber(3, 11, 'bearing points across the flange').default(5),
         flangeFlexibility: z.boolean({ error: 'must be true or false' }).default(true),
         credibleScenarios: z

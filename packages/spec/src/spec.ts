@@ -46,6 +46,8 @@ export interface BinSpec {
     columnHeight: number;
     /** Length of the column cap plate along the girder, m. */
     capPlateLength: number;
+    /** Bearing stiffeners over the columns, m: plate thickness, width from the web (undefined: from the flange), chamfer; undefined when there are none. */
+    bearingStiffeners?: { thickness: number; width?: number; chamfer: number };
     bearingPoints: number;
     flangeFlexibility: boolean;
     credibleScenarios: Array<(typeof supportScenarios)[number]>;
@@ -104,6 +106,12 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
       path: 'support.segmentsPerSpan',
       message: `support.segmentsPerSpan gives ${support.columns} x ${support.segmentsPerSpan} = ${support.columns * support.segmentsPerSpan} girder segments; at most ${MAX_GIRDER_SEGMENTS} (a whole number of segments per span between 2 and ${Math.floor(MAX_GIRDER_SEGMENTS / support.columns)} for ${support.columns} columns)`,
     });
+  }
+  if (support.type === 'ring-on-slab' && support.bearingStiffenerThickness !== undefined) {
+    issues.push({ path: 'support.bearingStiffenerThickness', message: 'support.bearingStiffenerThickness applies to a ring on columns (stiffeners over the column caps); a ring on a slab bears along its length' });
+  }
+  if (support.bearingStiffenerThickness === undefined && support.bearingStiffenerWidth !== undefined) {
+    issues.push({ path: 'support.bearingStiffenerWidth', message: 'support.bearingStiffenerWidth needs support.bearingStiffenerThickness (a thickness between 6 and 50 mm) to give bearing stiffeners' });
   }
   const ownPrefix = support.type === 'ring-on-slab' ? 'slab-' : 'column';
   for (const [index, scenario] of (support.credibleScenarios ?? []).entries()) {
@@ -172,6 +180,15 @@ export function normaliseSpec(document: unknown): BinSpec {
       columnSection: input.support.columnSection,
       columnHeight: input.support.columnHeight,
       capPlateLength: mmToM(input.support.capPlateLength),
+      ...(input.support.bearingStiffenerThickness !== undefined
+        ? {
+            bearingStiffeners: {
+              thickness: mmToM(input.support.bearingStiffenerThickness),
+              ...(input.support.bearingStiffenerWidth !== undefined ? { width: mmToM(input.support.bearingStiffenerWidth) } : {}),
+              chamfer: mmToM(input.support.bearingStiffenerChamfer),
+            },
+          }
+        : {}),
       bearingPoints: input.support.bearingPoints,
       flangeFlexibility: input.support.flangeFlexibility,
       credibleScenarios: [...new Set(input.support.credibleScenarios ?? (input.support.type === 'ring-on-slab' ? (['slab-contact'] as const) : (['column-cap-contact'] as const)))],

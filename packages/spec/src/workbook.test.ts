@@ -214,7 +214,7 @@ describe('a filled spec sheet', () => {
     expect(fill.message).toMatch(new RegExp(`^spec\\.xlsx, sheet Spec, row ${rows.get('bin.fillHeight')} \\(bin\\.fillHeight\\) must be between 0\\.1 m and bin\\.cylinderHeight`));
     const family = await specErrorOf(normaliseSpecWorkbook(await filled({ ...kestrelSheetValues, 'support.sectionFamilies': 'IPE, UPN' })));
     expect(family.path).toBe('support.sectionFamilies[1]');
-    expect(family.message).toBe(`spec.xlsx, sheet Spec, row ${rows.get('support.sectionFamilies')} (support.sectionFamilies[1]) must be one of IPE, HEB; got 'UPN'`);
+    expect(family.message).toBe(`spec.xlsx, sheet Spec, row ${rows.get('support.sectionFamilies')} (support.sectionFamilies[1]) must be one of IPE, HEA, HEB, HEM; got 'UPN'`);
     const force = await specErrorOf(normaliseSpecWorkbook(await filled({ ...kestrelSheetValues, 'equipment[0].force': -3 })));
     expect(force.message).toBe(`spec.xlsx, sheet Spec, row ${rows.get('equipment[0].force')} (equipment[0].force) must be a number between 0 and 10000 kN; got -3`);
     const missing = await specErrorOf(normaliseSpecWorkbook(await filled({ ...kestrelSheetValues, 'support.columns': null })));

@@ -38,7 +38,7 @@ export type {
   MemberSection,
   MomentShape,
 } from './buckling.js';
-export { checkAnchorTension, checkConcreteBearing, checkDeflection, checkFlangeLocalBending, flangeLocalBendingUtilisation, checkPatchLoading, checkTwist } from './local.js';
+export { checkAnchorTension, checkBearingStiffeners, bearingStiffenerSection, checkConcreteBearing, checkDeflection, checkFlangeLocalBending, flangeLocalBendingUtilisation, checkPatchLoading, checkTwist, type BearingStiffenerPair, type BearingStiffenerForces } from './local.js';
 export type { ConcreteBearingInput, FlangeContactInput, PatchLoadingInput, PatchLoadType } from './local.js';
 export { checkJunctionRingCompression, checkRingInPlaneBuckling, junctionEffectiveSection } from './junction.js';
 export type { JunctionEffectiveSection, TransitionJunction } from './junction.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkAnchorTension, checkConcreteBearing, checkDeflection, checkFlangeLocalBending, checkPatchLoading, checkTwist } from './local.js';
+import { checkAnchorTension, checkBearingStiffeners, checkConcreteBearing, checkDeflection, checkFlangeLocalBending, checkPatchLoading, checkTwist } from './local.js';
 import { checkJunctionRingCompression, checkRingInPlaneBuckling } from './junction.js';
 import { steelGrade } from './grades.js';
 import { rolledSection } from './sections.js';
@@ -146,5 +146,49 @@ describe('transition junction, EN 1993-4-1 (coefficients from memory)', () => {
     const result = checkRingInPlaneBuckling({ radialLineLoad: 50e3, radius: 3, secondMomentOfArea: I }, grade);
     expect(result.intermediate['q_cr'] ?? 0).toBeCloseTo((3 * 210e9 * I) / 27, 3);
     expect(result.utilisation).toBeCloseTo(50e3 / ((3 * 210e9 * I) / 27), 9);
+  });
+});
+
+describe('bearing stiffeners over a support (EN 1993-1-5 9.1, 9.4), by hand', () => {
+  // IPE 600 (EN 10365: h 600, t_w 12, t_f 19 mm), S355 (t <= 16 mm: f_y 355 MPa), a pair of plates
+  // 15 x 100 mm with a 15 mm chamfer; reactions 300 kN inside and 200 kN outside the web.
+  const section = rolledSection('IPE 600');
+  const grade = steelGrade('S355');
+  const bs = 0.1;
+  const ts = 0.015;
+  const c = 0.015;
+  const tw = 0.012;
+  const hw = 0.6 - 2 * 0.019;
+  const fy = 355e6;
+  const [bearing, buckling] = checkBearingStiffeners(section, grade, { width: bs, thickness: ts, chamfer: c }, { sideA: 300e3, sideB: 200e3 });
+
+  it('fitted end in bearing: F_side / ((b_s - c) t_s f_y / gamma_M0) for the more loaded side', () => {
+    expect(bearing?.id).toBe('stiffener-bearing');
+    expect(bearing?.utilisation).toBeCloseTo(300e3 / (((bs - c) * ts * fy) / 1.0), 10);
+  });
+
+  it('strut of the cruciform with 15 eps t_w of web each side, 0.75 h_w, curve c, plus the eccentricity of the unequal sides', () => {
+    const eps = Math.sqrt(235 / 355);
+    const strip = 30 * eps * tw + ts;
+    const A = 2 * bs * ts + strip * tw;
+    const I = (ts * (2 * bs + tw) ** 3) / 12 + ((strip - ts) * tw ** 3) / 12;
+    const lambda = (0.75 * hw) / Math.sqrt(I / A) / (93.9 * eps);
+    // EN 1993-1-1 6.3.1.2: Phi = 0.5 (1 + alpha (lambda - 0.2) + lambda^2), alpha = 0.49 (curve c);
+    // here lambda < 0.2, so chi = 1.
+    expect(lambda).toBeLessThan(0.2);
+    const NbRd = (A * fy) / 1.0;
+    const M = (300e3 - 200e3) * ((tw + bs) / 2);
+    const MRd = ((I / (bs + tw / 2)) * fy) / 1.0;
+    expect(buckling?.id).toBe('stiffener-buckling');
+    expect(buckling?.intermediate['chi']).toBe(1);
+    expect(buckling?.utilisation).toBeCloseTo(500e3 / NbRd + M / MRd, 10);
+  });
+
+  it('a slender pair buckles: chi below 1 from curve c', () => {
+    const [, slender] = checkBearingStiffeners(rolledSection('HE 1000 B'), grade, { width: 0.04, thickness: 0.006, chamfer: 0.01 }, { sideA: 100e3, sideB: 100e3 });
+    const lambda = slender?.intermediate['lambda_bar'] as number;
+    const phi = 0.5 * (1 + 0.49 * (lambda - 0.2) + lambda ** 2);
+    expect(lambda).toBeGreaterThan(0.2);
+    expect(slender?.intermediate['chi']).toBeCloseTo(1 / (phi + Math.sqrt(phi ** 2 - lambda ** 2)), 12);
   });
 });

@@ -249,3 +249,92 @@ export function checkTwist(input: { twist: number; limit?: number }): CheckResul
     intermediate: {},
   };
 }
+
+/** A pair of bearing stiffeners, one each side of the web, over a support (fitted to the loaded flange). */
+export interface BearingStiffenerPair {
+  /** b_s, width of each stiffener plate from the web face [m] */
+  width: number;
+  /** t_s, thickness of each stiffener plate [m] */
+  thickness: number;
+  /** c, corner chamfer (cope) at the web-flange fillet, not in bearing [m] */
+  chamfer: number;
+}
+
+export interface BearingStiffenerForces {
+  /** Reaction on the side of one stiffener (e.g. inside the ring) [N], compression positive */
+  sideA: number;
+  /** Reaction on the side of the other stiffener [N], compression positive */
+  sideB: number;
+}
+
+/** The effective cruciform of a stiffener pair with its web strip, EN 1993-1-5 9.1(2) and Figure 9.1. */
+export function bearingStiffenerSection(section: ClassifiableSection, grade: SteelGrade, stiffener: BearingStiffenerPair) {
+  const bs = positive('width', stiffener.width);
+  const ts = positive('thickness', stiffener.thickness);
+  const c = nonNegative('chamfer', stiffener.chamfer);
+  if (c >= bs) throw new SteelError('INVALID_OPTIONS', `The stiffener chamfer (${c} m) must be smaller than its width (${bs} m).`, 'chamfer');
+  const { webThickness: tw, depth: h, flangeThickness: tf } = section.dimensions;
+  const fy = Math.min(strengthsForThickness(grade, ts).yieldStrength, strengthsForThickness(grade, tw).yieldStrength);
+  const epsilon = Math.sqrt(235e6 / fy);
+  // Web strip of 15 eps t_w each side of the stiffener pair acts with it (EN 1993-1-5 9.1(2)).
+  const webStrip = 30 * epsilon * tw + ts;
+  const area = 2 * bs * ts + webStrip * tw;
+  // Second moment about the web's mid-plane (buckling out of the plane of the web).
+  const secondMoment = (ts * (2 * bs + tw) ** 3) / 12 + ((webStrip - ts) * tw ** 3) / 12;
+  const webDepth = h - 2 * tf;
+  return { bs, ts, c, tw, fy, epsilon, webStrip, area, secondMoment, webDepth };
+}
+
+/**
+ * Bearing stiffeners over a support, a pair welded each side of the web and fitted to the loaded
+ * flange. Two checks:
+ *  - 'stiffener-bearing': the fitted end of each stiffener in bearing, F_side <= (b_s - c) t_s f_y / gamma_M0
+ *    (common practice; the web's own share of the bearing is neglected, which is conservative);
+ *  - 'stiffener-buckling': the cruciform of the pair and a web strip of 15 eps t_w each side (EN 1993-1-5
+ *    9.1(2)) as a strut out of the web's plane, buckling length 0.75 h_w with both flanges held laterally
+ *    and curve c (EN 1993-1-5 9.4(2), from memory), chi by EN 1993-1-1 6.3.1.2; an unequal reaction of the
+ *    two sides adds the moment (F_A - F_B) (t_w + b_s)/2, taken with a linear interaction N/N_b,Rd + M/M_el,Rd
+ *    (common practice, conservative).
+ */
+export function checkBearingStiffeners(section: ClassifiableSection, grade: SteelGrade, stiffener: BearingStiffenerPair, forces: BearingStiffenerForces): CheckResult[] {
+  const s = bearingStiffenerSection(section, grade, stiffener);
+  const sideA = Math.max(0, nonNegativeOrZero(forces.sideA));
+  const sideB = Math.max(0, nonNegativeOrZero(forces.sideB));
+  const bearingArea = (s.bs - s.c) * s.ts;
+  const bearingResistance = (bearingArea * s.fy) / grade.gammaM0;
+  const larger = Math.max(sideA, sideB);
+  const bearing: CheckResult = {
+    id: 'stiffener-bearing',
+    title: 'Bearing stiffener: fitted end in bearing (each side)',
+    clause: 'EN 1993-1-5 9.1; fitted end in bearing (common practice)',
+    utilisation: ratio(larger, bearingResistance),
+    inputs: { F_A: sideA, F_B: sideB, b_s: s.bs, t_s: s.ts, c: s.c, f_y: s.fy, gamma_M0: grade.gammaM0 },
+    intermediate: { A_bearing: bearingArea, F_Rd: bearingResistance },
+  };
+  const total = sideA + sideB;
+  const length = 0.75 * s.webDepth;
+  const radius = Math.sqrt(s.secondMoment / s.area);
+  const slenderness = length / radius / (93.9 * s.epsilon);
+  const alpha = 0.49;
+  const phi = 0.5 * (1 + alpha * (slenderness - 0.2) + slenderness ** 2);
+  const chi = slenderness <= 0.2 ? 1 : Math.min(1, 1 / (phi + Math.sqrt(phi ** 2 - slenderness ** 2)));
+  const gammaM1 = grade.gammaM1;
+  const axialResistance = (chi * s.area * s.fy) / gammaM1;
+  const lever = (s.tw + s.bs) / 2;
+  const moment = Math.abs(sideA - sideB) * lever;
+  const momentResistance = ((s.secondMoment / (s.bs + s.tw / 2)) * s.fy) / gammaM1;
+  const buckling: CheckResult = {
+    id: 'stiffener-buckling',
+    title: 'Bearing stiffener: strut out of the plane of the web, with the eccentricity of unequal sides',
+    clause: 'EN 1993-1-5 9.1(2), 9.4(2) (from memory); EN 1993-1-1 6.3.1.2 curve c',
+    utilisation: ratio(total, axialResistance) + ratio(moment, momentResistance),
+    inputs: { F_A: sideA, F_B: sideB, b_s: s.bs, t_s: s.ts, t_w: s.tw, h_w: s.webDepth, f_y: s.fy, gamma_M1: gammaM1 },
+    intermediate: { eps: s.epsilon, A_eff: s.area, I: s.secondMoment, l: length, i: radius, lambda_bar: slenderness, chi, N_b_Rd: axialResistance, M_Ed: moment, M_el_Rd: momentResistance },
+  };
+  return [bearing, buckling];
+}
+
+function nonNegativeOrZero(value: number): number {
+  if (!Number.isFinite(value)) throw new SteelError('INVALID_FORCES', `A stiffener force must be a finite number in N; got ${value}.`, 'forces');
+  return value;
+}
