@@ -14,6 +14,7 @@ import {
   checkFlangeLocalBending,
   flangeLocalBendingUtilisation,
   checkJunctionRingCompression,
+  checkLateralTorsionalBuckling,
   checkPatchLoading,
   checkRingInPlaneBuckling,
   checkTwist,
@@ -165,6 +166,24 @@ function patchLoadingChecks(section: SteelSection, grade: SteelGrade, spec: BinS
     const check = checkPatchLoading(section, grade, { force: Math.max(0, column.force), stiffBearingLength: spec.support.capPlateLength, type: 'a' });
     keepWorst(worst, { ...check, inputs: { ...check.inputs, column: column.index + 1 } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, column.node));
   }
+}
+
+/**
+ * Lateral-torsional buckling between the columns of a girder held only there (support.girderRestraint
+ * 'columns'): EN 1993-1-1 6.3.2.3 (rolled sections), fork supports at the columns, the span taken as
+ * straight over its arc length 2 pi R / n, C1 = 1 (uniform moment: conservative for the hogging and
+ * sagging of a continuous ring, common practice). M_b,Rd is the same along the span, so the station
+ * with the largest |My| governs. With the default 'shell' the top flange is held along its length
+ * and no LTB check is made.
+ */
+function lateralTorsionalBucklingChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  if (layout.kind === 'slab' || spec.support.girderRestraint !== 'columns') return;
+  let governing: Station | undefined;
+  for (const station of item.analysis.stations) if (!governing || Math.abs(station.My) > Math.abs(governing.My)) governing = station;
+  if (!governing) return;
+  const span = (2 * Math.PI * layout.radius) / layout.columns;
+  const check = checkLateralTorsionalBuckling(section, grade, governing.My, { length: span, momentShape: 'uniform', method: 'rolled' });
+  keepWorst(worst, check, item.analysis.combination, item.scenario, governing);
 }
 
 /** Setback of a default bearing stiffener from the flange tip, m (common practice: 10 mm). */
@@ -414,6 +433,7 @@ export function forceChecks(context: GirderCheckContext, section: SteelSection, 
       stiffenerChecks(section, grade, stiffener, context.layout, item, worst);
     }
     ringChecks(section, grade, context.spec, context.loads, context.layout, item, worst);
+    lateralTorsionalBucklingChecks(section, grade, context.spec, context.layout, item, worst);
     anchorChecks(context.spec, item, worst);
     envelopes.push(...worst.values());
   }

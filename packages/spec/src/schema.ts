@@ -112,6 +112,7 @@ export const binSpecInput = z.strictObject(
         bearingStiffenerThickness: quantity({ min: 6, max: 50, unit: 'mm' }).optional(),
         bearingStiffenerWidth: quantity({ min: 30, max: 500, unit: 'mm' }).optional(),
         bearingStiffenerChamfer: quantity({ min: 0, max: 50, unit: 'mm' }).default(15),
+        girderRestraint: choice(['shell', 'columns']).default('shell'),
         bearingPoints: wholeNumber(3, 11, 'bearing points across the flange').default(5),
         flangeFlexibility: z.boolean({ error: 'must be true or false' }).default(true),
         credibleScenarios: z

@@ -75,6 +75,7 @@ export const fieldNotes: Record<string, FieldNote> = {
   'support.capPlateLength': { unit: 'mm', note: 'Length of the column cap plate along the girder.' },
   'support.bearingStiffenerThickness': { unit: 'mm', note: 'Bearing stiffeners over the columns: thickness of each plate of the pair (leave empty: no stiffeners).' },
   'support.bearingStiffenerWidth': { unit: 'mm', note: 'Width of each bearing stiffener from the web (empty: the flange outstand less 10 mm, for each section).' },
+  'support.girderRestraint': { unit: '', note: "Lateral restraint of the girder: 'shell' (the shell holds the top flange along its length; no lateral-torsional buckling) or 'columns' (held only at the columns: LTB between them is checked)." },
   'support.bearingStiffenerChamfer': { unit: 'mm', note: 'Corner chamfer of the bearing stiffeners at the web-flange fillet (not in bearing).' },
   'support.bearingPoints': { unit: '', note: 'Bearing points across the flange width on each cap.' },
   'support.flangeFlexibility': { unit: '', note: "Put the flange outstand's bending stiffness in series with each bearing point." },

@@ -48,6 +48,8 @@ export interface BinSpec {
     capPlateLength: number;
     /** Bearing stiffeners over the columns, m: plate thickness, width from the web (undefined: from the flange), chamfer; undefined when there are none. */
     bearingStiffeners?: { thickness: number; width?: number; chamfer: number };
+    /** 'shell': the top flange held along its length by the shell; 'columns': held only at the columns (LTB checked between them). */
+    girderRestraint: 'shell' | 'columns';
     bearingPoints: number;
     flangeFlexibility: boolean;
     credibleScenarios: Array<(typeof supportScenarios)[number]>;
@@ -180,6 +182,7 @@ export function normaliseSpec(document: unknown): BinSpec {
       columnSection: input.support.columnSection,
       columnHeight: input.support.columnHeight,
       capPlateLength: mmToM(input.support.capPlateLength),
+      girderRestraint: input.support.girderRestraint,
       ...(input.support.bearingStiffenerThickness !== undefined
         ? {
             bearingStiffeners: {
