@@ -20,5 +20,5 @@ times.sort((a, b) => a - b);
 const median = times[Math.floor(times.length / 2)] ?? Number.NaN;
 console.log('design benchmark: demo bin (demo-data/kestrel-grain-bin.yaml)');
 console.log(`  runs ${runs}, median ${median.toFixed(0)} ms, min ${times[0]?.toFixed(0)} ms, max ${times[times.length - 1]?.toFixed(0)} ms`);
-console.log(`  ${rounds} sections analysed in the sizing loop (each under every ULS combination and credible scenario); result ${sections}`);
+console.log(`  ${rounds} rounds in the sizing loop (a section analysed under every design combination and credible scenario, or screened under the governing ones and set aside); result ${sections}`);
 console.log(`  target: whole demo design under 5000 ms -> ${median < 5000 ? 'met' : 'NOT met'}`);
