@@ -2,7 +2,7 @@ import { analyseAll, GirderError, type AnalysisResult, type GirderModel, type Se
 import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
 import { solveSelection, tieTolerance, type SelectionCandidate, type SelectionGroup, type SelectionProblem } from '@binsupport/optimiser';
 import type { BinSpec } from '@binsupport/spec';
-import { loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
+import { generateWeldedSections, loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
 import { DesignError } from './errors.js';
 import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
@@ -97,11 +97,14 @@ function selectionSetup(context: DesignContext, options: DesignOptions, girderLe
   if (hasColumns && columnCandidates.length === 0) throw new DesignError('BAD_INPUT', 'no column candidates in the chosen series', 'options.columnSeries');
   const columnLength = layout.columns * spec.support.columnHeight;
   const keysMatter = maxDistinctSections !== undefined || costPerDistinctSection > 0;
-  const costObjective = keysMatter || grades.some((grade) => price(grade) !== 1);
+  const costObjective = keysMatter || grades.some((grade) => price(grade) !== 1) || (spec.support.weldedGirders !== undefined && spec.optimisation.weldedPriceFactor !== 1);
   const keyOf = (section: SteelSection, grade: SteelGrade): string => `${section.designation} ${grade.name}`;
   const gradeAttribute = (grade: SteelGrade): number => Math.round((grade.strengths[0]?.yieldStrength ?? 0) / 1e6);
   // The girder's steel includes its bearing stiffeners, when the spec asks for them (their size follows the section).
-  const girderCost = (section: SteelSection, grade: SteelGrade): number => (section.properties.massPerMetre * girderLength + bearingStiffenerMass(section, spec, layout)) * price(grade);
+  // A welded girder's steel costs optimisation.weldedPriceFactor times a rolled section's (fabrication).
+  const fabricationFactor = (section: SteelSection): number => (section.fabrication === 'welded' ? spec.optimisation.weldedPriceFactor : 1);
+  const girderCost = (section: SteelSection, grade: SteelGrade): number =>
+    (section.properties.massPerMetre * girderLength * fabricationFactor(section) + bearingStiffenerMass(section, spec, layout)) * price(grade);
   const columnCost = (section: SteelSection, grade: SteelGrade): number => section.properties.massPerMetre * columnLength * price(grade);
 
   const girderMemo = new Map<string, CheckEnvelope[]>();
@@ -225,15 +228,15 @@ function selectionSetup(context: DesignContext, options: DesignOptions, girderLe
     },
     /** The least objective any choice with this girder can have. */
     lowerBound: (section: SteelSection): number =>
-      (section.properties.massPerMetre * girderLength + bearingStiffenerMass(section, spec, layout)) * minPrice + (lightestColumn ? lightestColumn.properties.massPerMetre * columnLength * minPrice : 0) + costPerDistinctSection,
+      (section.properties.massPerMetre * girderLength * fabricationFactor(section) + bearingStiffenerMass(section, spec, layout)) * minPrice + (lightestColumn ? lightestColumn.properties.massPerMetre * columnLength * minPrice : 0) + costPerDistinctSection,
     bestAttemptColumn: (entry: SectionAnalysis, grade: SteelGrade): SteelSection | undefined => {
       if (!hasColumns) return undefined;
       const ranked = columnCandidates.map((section) => ({ section, utilisation: columnUtilisation(entry, section, grade) }));
       return (ranked.find((option) => option.utilisation <= 1) ?? [...ranked].sort((a, b) => a.utilisation - b.utilisation)[0])?.section;
     },
     /** Sum of mass x price over the members, plus the cost per distinct section of those that are rolled sections (keyed). */
-    objectiveOf: (members: Array<{ mass: number; key: string | undefined }>, grade: SteelGrade): number =>
-      members.reduce((sum, member) => sum + member.mass * price(grade), 0) + costPerDistinctSection * new Set(members.flatMap((member) => (member.key === undefined ? [] : [member.key]))).size,
+    objectiveOf: (members: Array<{ mass: number; key: string | undefined; factor?: number }>, grade: SteelGrade): number =>
+      members.reduce((sum, member) => sum + member.mass * (member.factor ?? 1) * price(grade), 0) + costPerDistinctSection * new Set(members.flatMap((member) => (member.key === undefined ? [] : [member.key]))).size,
   };
 }
 
@@ -587,6 +590,31 @@ function peaksOf(stations: Station[]): Peaks {
 
 /** The whole pipeline for one spec: loads, analysis, checks, selection, verification, result. */
 /** The design options a spec sets (optimisation and serviceability inputs); explicit options win. */
+/** Most welded girders a design considers (each may need its own analysis in the descent). */
+export const MAX_WELDED_CANDIDATES = 800;
+
+/** The welded plate girders within support.weldedGirders (none when not given). */
+function weldedCandidates(spec: BinSpec): SteelSection[] {
+  const limits = spec.support.weldedGirders;
+  if (!limits) return [];
+  let sections: SteelSection[];
+  try {
+    sections = generateWeldedSections(limits);
+  } catch (error) {
+    if (error instanceof SteelError) throw new DesignError('BAD_INPUT', `support.weldedGirders: ${error.message}`, 'support.weldedGirders');
+    throw error;
+  }
+  if (sections.length === 0) throw new DesignError('BAD_INPUT', 'support.weldedGirders gives no girder (every depth leaves no web between the flanges, or no web is as thin as a flange)', 'support.weldedGirders');
+  if (sections.length > MAX_WELDED_CANDIDATES) {
+    throw new DesignError(
+      'BAD_INPUT',
+      `support.weldedGirders gives ${sections.length} welded girders; at most ${MAX_WELDED_CANDIDATES} (narrow the depth or width range, take larger steps, or list fewer plate thicknesses)`,
+      'support.weldedGirders',
+    );
+  }
+  return sections;
+}
+
 export function optionsFromSpec(spec: BinSpec): DesignOptions {
   const series: Record<BinSpec['optimisation']['columnSeries'][number], SteelSection['series']> = { HEA: 'HE A', HEB: 'HE B', HEM: 'HE M' };
   const prices = Object.fromEntries(Object.entries(spec.optimisation.pricePerKg ?? {}).filter(([, price]) => price !== undefined)) as Record<string, number>;
@@ -612,9 +640,9 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
   });
   const { loads, layout } = context;
   const series = new Set(spec.support.sectionFamilies.map((family) => familyToSeries[family]));
-  const candidates = loadRolledSections()
-    .filter((section) => series.has(section.series))
-    .sort((a, b) => a.properties.massPerMetre - b.properties.massPerMetre || a.designation.localeCompare(b.designation));
+  const candidates = [...loadRolledSections().filter((section) => series.has(section.series)), ...weldedCandidates(spec)].sort(
+    (a, b) => a.properties.massPerMetre - b.properties.massPerMetre || a.designation.localeCompare(b.designation),
+  );
   if (candidates.length === 0) throw new DesignError('BAD_INPUT', 'no candidate sections in the chosen families', 'support.sectionFamilies');
 
   const credible = SCENARIOS.filter((scenario) => spec.support.credibleScenarios.includes(scenario.id));
@@ -913,7 +941,14 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     utilisations.push(...finalColumnEnvelopes.map((envelope) => ({ ...rowOf(COLUMN_MEMBER_ID, finalColumn)(envelope), position: { ...positionFor(envelope.station), description: `column C${envelope.check.inputs['column'] ?? ''}` } })));
   }
   const steelMass = members.reduce((sum, entry) => sum + entry.mass, 0);
-  const objectiveValue = selection.objectiveOf(members.map((entry) => ({ mass: entry.mass, key: entry.id === STIFFENER_MEMBER_ID ? undefined : `${entry.section} ${entry.grade}` })), grade);
+  const objectiveValue = selection.objectiveOf(
+    members.map((entry) => ({
+      mass: entry.mass,
+      key: entry.id === STIFFENER_MEMBER_ID ? undefined : `${entry.section} ${entry.grade}`,
+      ...(entry.id === MEMBER_ID && final.section.fabrication === 'welded' ? { factor: spec.optimisation.weldedPriceFactor } : {}),
+    })),
+    grade,
+  );
   // Force diagrams are kept for the governing combination of each scenario and the one with the
   // largest torsion (the others are summarised by their peaks; every one can be re-run with `analyse`).
   // Peaks and bearing state, once per reported analysis.

@@ -24,7 +24,7 @@ import {
   type BearingStiffenerPair,
 } from '@binsupport/steel';
 import type { CheckEnvelope } from './evaluate.js';
-import type { RingLayout } from './ring.js';
+import { capGroupId, type RingLayout } from './ring.js';
 
 /** One analysed combination of one scenario, with the model it was analysed on. */
 export interface AnalysedCase {
@@ -144,7 +144,7 @@ export function columnReactions(model: GirderModel, analysis: AnalysisResult, la
   const result: ColumnReaction[] = [];
   for (let j = 0; j < layout.columns; j++) {
     const node = model.nodes[j * layout.segmentsPerSpan]?.id ?? '';
-    const cap = points.filter((point) => point.node === node && point.id.includes('-cap-'));
+    const cap = points.filter((point) => point.node === node && point.group === capGroupId(j));
     if (cap.length > 0) {
       result.push({ index: j, node, force: cap.reduce((sum, point) => sum + point.force, 0), moment: cap.reduce((sum, point) => sum + point.force * point.across, 0), points: cap.map((point) => point.force) });
       continue;
@@ -239,7 +239,7 @@ function stiffenerChecks(section: SteelSection, grade: SteelGrade, pair: Bearing
       );
       continue;
     }
-    const cap = points.filter((point) => point.node === column.node && point.id.includes('-cap-'));
+    const cap = points.filter((point) => point.node === column.node && point.group === capGroupId(column.index));
     let inside = 0;
     let outside = 0;
     if (cap.length === 0) {

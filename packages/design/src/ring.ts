@@ -32,6 +32,11 @@ export function columnId(index: number): string {
   return `C${index + 1}`;
 }
 
+/** The bearing group of the cap springs of column `index` (checks find the cap's points by it). */
+export function capGroupId(index: number): string {
+  return `${columnId(index)} cap`;
+}
+
 /** Angle of ring node k, rad: column j stands at 2 pi j / n, nodes are spaced evenly between. */
 export function nodeAngle(layout: RingLayout, index: number): number {
   return (2 * Math.PI * index) / (layout.columns * layout.segmentsPerSpan);
@@ -193,7 +198,7 @@ export function buildRingModel(input: RingModelInput): GirderModel {
           stiffness: point.stiffness,
           offset: [point.across * outward[0], point.across * outward[1], -point.down],
           behaviour: column.behaviour,
-          group: `${columnId(j)} cap`,
+          group: capGroupId(j),
           tributaryLength: column.capLength,
         });
       });

@@ -113,6 +113,21 @@ export const binSpecInput = z.strictObject(
         bearingStiffenerWidth: quantity({ min: 30, max: 500, unit: 'mm' }).optional(),
         bearingStiffenerChamfer: quantity({ min: 0, max: 50, unit: 'mm' }).default(15),
         girderRestraint: choice(['shell', 'columns']).default('shell'),
+        weldedGirders: z
+          .strictObject(
+            {
+              minDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
+              maxDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
+              depthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
+              minFlangeWidth: quantity({ min: 100, max: 1000, unit: 'mm' }),
+              maxFlangeWidth: quantity({ min: 100, max: 1000, unit: 'mm' }),
+              flangeWidthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
+              flangeThicknesses: z.array(quantity({ min: 5, max: 80, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
+              webThicknesses: z.array(quantity({ min: 4, max: 50, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
+            },
+            { error: 'must be a table of welded-girder limits (minDepth, maxDepth, minFlangeWidth, maxFlangeWidth in mm)' },
+          )
+          .optional(),
         bearingPoints: wholeNumber(3, 11, 'bearing points across the flange').default(5),
         flangeFlexibility: z.boolean({ error: 'must be true or false' }).default(true),
         credibleScenarios: z
@@ -151,10 +166,11 @@ export const binSpecInput = z.strictObject(
           costPerDistinctSection: quantity({ min: 0, max: 1e9, unit: '(price units)' }).default(0),
           maxDistinctSections: wholeNumber(1, 20, 'distinct sections').optional(),
           columnSeries: z.array(choice(['HEA', 'HEB', 'HEM']), { error: 'must be a list of column section families' }).min(1).default(['HEB']),
+          weldedPriceFactor: quantity({ min: 0.5, max: 5, unit: '' }).default(1),
         },
         { error: 'must be a table of optimisation settings' },
       )
-      .default({ costPerDistinctSection: 0, columnSeries: ['HEB'] }),
+      .default({ costPerDistinctSection: 0, columnSeries: ['HEB'], weldedPriceFactor: 1 }),
     serviceability: z
       .strictObject(
         {

@@ -50,6 +50,8 @@ export interface BinSpec {
     bearingStiffeners?: { thickness: number; width?: number; chamfer: number };
     /** 'shell': the top flange held along its length by the shell; 'columns': held only at the columns (LTB checked between them). */
     girderRestraint: 'shell' | 'columns';
+    /** Welded plate girders as girder candidates, m (the steel package's WeldedGirderLimits); undefined: rolled only. */
+    weldedGirders?: { minDepth: number; maxDepth: number; depthStep: number; minFlangeWidth: number; maxFlangeWidth: number; flangeWidthStep: number; flangeThicknesses?: number[]; webThicknesses?: number[] };
     bearingPoints: number;
     flangeFlexibility: boolean;
     credibleScenarios: Array<(typeof supportScenarios)[number]>;
@@ -62,6 +64,8 @@ export interface BinSpec {
     costPerDistinctSection: number;
     maxDistinctSections?: number;
     columnSeries: Array<'HEA' | 'HEB' | 'HEM'>;
+    /** Price per kg of a welded girder relative to a rolled section of the same grade. */
+    weldedPriceFactor: number;
   };
   /** Serviceability limits: deflection span / ratio, twist rad. */
   serviceability: { deflectionLimitRatio: number; twistLimit: number };
@@ -114,6 +118,13 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
   }
   if (support.bearingStiffenerThickness === undefined && support.bearingStiffenerWidth !== undefined) {
     issues.push({ path: 'support.bearingStiffenerWidth', message: 'support.bearingStiffenerWidth needs support.bearingStiffenerThickness (a thickness between 6 and 50 mm) to give bearing stiffeners' });
+  }
+  const welded = support.weldedGirders;
+  if (welded && welded.maxDepth < welded.minDepth) {
+    issues.push({ path: 'support.weldedGirders.maxDepth', message: `support.weldedGirders.maxDepth must be at least minDepth (${welded.minDepth} mm); got ${welded.maxDepth}` });
+  }
+  if (welded && welded.maxFlangeWidth < welded.minFlangeWidth) {
+    issues.push({ path: 'support.weldedGirders.maxFlangeWidth', message: `support.weldedGirders.maxFlangeWidth must be at least minFlangeWidth (${welded.minFlangeWidth} mm); got ${welded.maxFlangeWidth}` });
   }
   const ownPrefix = support.type === 'ring-on-slab' ? 'slab-' : 'column';
   for (const [index, scenario] of (support.credibleScenarios ?? []).entries()) {
@@ -183,6 +194,20 @@ export function normaliseSpec(document: unknown): BinSpec {
       columnHeight: input.support.columnHeight,
       capPlateLength: mmToM(input.support.capPlateLength),
       girderRestraint: input.support.girderRestraint,
+      ...(input.support.weldedGirders
+        ? {
+            weldedGirders: {
+              minDepth: mmToM(input.support.weldedGirders.minDepth),
+              maxDepth: mmToM(input.support.weldedGirders.maxDepth),
+              depthStep: mmToM(input.support.weldedGirders.depthStep),
+              minFlangeWidth: mmToM(input.support.weldedGirders.minFlangeWidth),
+              maxFlangeWidth: mmToM(input.support.weldedGirders.maxFlangeWidth),
+              flangeWidthStep: mmToM(input.support.weldedGirders.flangeWidthStep),
+              ...(input.support.weldedGirders.flangeThicknesses ? { flangeThicknesses: input.support.weldedGirders.flangeThicknesses.map(mmToM) } : {}),
+              ...(input.support.weldedGirders.webThicknesses ? { webThicknesses: input.support.weldedGirders.webThicknesses.map(mmToM) } : {}),
+            },
+          }
+        : {}),
       ...(input.support.bearingStiffenerThickness !== undefined
         ? {
             bearingStiffeners: {

@@ -8,9 +8,11 @@ export type SectionSeries = 'IPE' | 'HE A' | 'HE B' | 'HE M';
 
 /** A rolled section ready for design: SI dimensions, computed properties and where the row came from. */
 export interface SteelSection {
-  /** e.g. "IPE 300", "HE 300 B" */
+  /** e.g. "IPE 300", "HE 300 B", or "WI 800x300x10x25" for a welded girder */
   designation: string;
-  series: SectionSeries;
+  series: SectionSeries | 'welded I';
+  /** 'welded' for a plate girder (its shear area and torsion constant differ); rolled when absent */
+  fabrication?: 'rolled' | 'welded';
   dimensions: ISectionDimensions;
   properties: SectionProperties;
   /** provenance of the dimensions */
