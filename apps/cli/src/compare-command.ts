@@ -11,7 +11,7 @@ import { parseArgs } from 'node:util';
 import cliProgress from 'cli-progress';
 import { Piscina } from 'piscina';
 import { compareReport, compareShard, DesignError, mergeShards, optionsDigest, shardCases, stableJson, type CompareResult, type CompareRow } from '@binsupport/design';
-import { atomicWrite, outputPath, writeComparePdf, writeCompareXlsx } from '@binsupport/deliverables';
+import { atomicWrite, cheapestSentence, outputPath, writeComparePdf, writeCompareXlsx } from '@binsupport/deliverables';
 import { readOptionsFile, SpecError, type OptionCase } from '@binsupport/spec';
 import type { CliStreams } from './cli.js';
 
@@ -140,9 +140,9 @@ async function writeComparison(result: CompareResult, outDir: string): Promise<v
 function report(streams: CliStreams, result: CompareResult, outDir: string): number {
   const { counts } = result;
   streams.stdout.write(`${counts.options} options: ${counts.verified} verified, ${counts.infeasible} infeasible, ${counts.invalid} invalid, ${counts.failed} refused; wrote compare.json, compare.xlsx, compare.pdf to ${outDir}\n`);
-  const cheapest = result.cheapest === null ? undefined : result.rows.find((row) => row.index === result.cheapest);
-  if (!cheapest) return fail(streams, EXIT_NOT_SATISFIED, 'no option has a verified design');
-  streams.stdout.write(`cheapest feasible: #${cheapest.index} ${cheapest.name}: ${((cheapest.steelMass ?? 0) / 1000).toFixed(2)} t, girder ${cheapest.girder?.section ?? ''} ${cheapest.girder?.grade ?? ''}${cheapest.columns ? `, columns ${cheapest.columns.count} x ${cheapest.columns.section}` : ''}\n`);
+  // The same sentence as compare.pdf.
+  if (result.cheapest === null) return fail(streams, EXIT_NOT_SATISFIED, cheapestSentence(result));
+  streams.stdout.write(`${cheapestSentence(result)}\n`);
   return EXIT_OK;
 }
 

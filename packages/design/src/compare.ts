@@ -5,7 +5,7 @@
 import { createHash } from 'node:crypto';
 import { circularBinGeometry } from '@binsupport/loads';
 import { normaliseSpec, setInputPath, SpecError, type BinSpec, type InputOverride, type OptionCase, type OptionsFile } from '@binsupport/spec';
-import { CAUTIONS, designFromSpec } from './design.js';
+import { CAUTIONS, COLUMN_MEMBER_ID, designFromSpec, MEMBER_ID } from './design.js';
 import { DesignError } from './errors.js';
 import { stableJson } from './json.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
@@ -166,8 +166,8 @@ export async function designOption(option: OptionCase): Promise<CompareRow> {
   } catch (error) {
     return errorRow(option, prepared.overrides, error instanceof DesignError && error.code === 'BAD_INPUT' ? 'invalid' : 'failed', error);
   }
-  const girder = result.members.find((member) => member.id === 'RG');
-  const columns = result.members.find((member) => member.id === 'C');
+  const girder = result.members.find((member) => member.id === MEMBER_ID);
+  const columns = result.members.find((member) => member.id === COLUMN_MEMBER_ID);
   const governingMember = [...result.members].sort((a, b) => (b.utilisation ?? Infinity) - (a.utilisation ?? Infinity))[0];
   const maxUtilisation = result.members.some((member) => member.utilisation === null) ? null : Math.max(...result.members.map((member) => member.utilisation ?? 0));
   return {

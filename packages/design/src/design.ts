@@ -270,8 +270,9 @@ export interface DesignOutcome {
 
 export const familyToSeries: Record<BinSpec['support']['sectionFamilies'][number], SteelSection['series']> = { IPE: 'IPE', HEA: 'HE A', HEB: 'HE B', HEM: 'HE M' };
 
-const MEMBER_ID = 'RG';
-const COLUMN_MEMBER_ID = 'C';
+/** Member ids of the result (docs/output-schema.md): the ring girder and the columns. */
+export const MEMBER_ID = 'RG';
+export const COLUMN_MEMBER_ID = 'C';
 /** The bearing stiffeners over the columns (a member of the result when the spec asks for them). */
 const STIFFENER_MEMBER_ID = 'ST';
 
@@ -336,34 +337,33 @@ export function loadsFor(spec: BinSpec): LoadSet {
   }
 }
 
-/** Check the equilibrium of one analysis: reactions balance the applied loads (guard). */
-function guardEquilibrium(analysis: AnalysisResult, scenario: string): number {
+/** The largest out-of-balance of reactions against applied loads, relative to the applied load, and its axis. */
+function relativeImbalance(analysis: AnalysisResult): { relative: number; axis: number; imbalance: number; scale: number } {
   const scale = Math.max(...analysis.appliedSum.map(Math.abs), 1);
-  let largest = 0;
+  let worst = { relative: 0, axis: 0, imbalance: 0, scale };
   for (let i = 0; i < 3; i++) {
     const imbalance = Math.abs((analysis.reactionSum[i] ?? 0) + (analysis.appliedSum[i] ?? 0));
-    largest = Math.max(largest, imbalance / scale);
-    if (imbalance > RELATIVE_EQUILIBRIUM_TOLERANCE * scale) {
-      // Out of balance with a small backward error: the stiffness of the contact state is nearly
-      // singular (a near-mechanism), typically a girder left on part of its bearings.
-      const springs = analysis.springForces.length;
-      const pressing = analysis.contact?.activeSprings.length ?? springs;
-      const largest = Math.max(0, ...analysis.displacements.map((node) => Math.max(Math.abs(node.ux), Math.abs(node.uy), Math.abs(node.uz))));
-      const contact = springs > 0 ? `, with ${pressing} of ${springs} bearing points pressing` : '';
-      throw new DesignError(
-        'GUARD_FAILED',
-        `equilibrium guard: in ${analysis.combination} / ${scenario} the reactions do not balance the loads along ${'XYZ'[i]} (imbalance ${imbalance.toExponential(3)} N of ${scale.toExponential(3)} N; largest displacement ${largest.toExponential(2)} m${contact}): the contact state is a near-mechanism and its solution cannot be trusted; if the bin lifts off under this combination it must be held down (anchors) or be heavier`,
-      );
-    }
+    if (imbalance / scale > worst.relative) worst = { relative: imbalance / scale, axis: i, imbalance, scale };
   }
-  return largest;
+  return worst;
 }
 
-/**
- * The combinations that size members: ultimate limit states of resistance (STR, and seismic where
- * given). EQU combinations (EN 1990 6.4.3.1, static equilibrium) are analysed and reported, for uplift
- * and anchors, but do not size the girder's cross-section.
- */
+/** Check the equilibrium of one analysis: reactions balance the applied loads (guard, after every analysis). */
+function guardEquilibrium(analysis: AnalysisResult, scenario: string): void {
+  const { relative, axis, imbalance, scale } = relativeImbalance(analysis);
+  if (relative <= RELATIVE_EQUILIBRIUM_TOLERANCE) return;
+  // Out of balance with a small backward error: the stiffness of the contact state is nearly
+  // singular (a near-mechanism), typically a girder left on part of its bearings.
+  const springs = analysis.springForces.length;
+  const pressing = analysis.contact?.activeSprings.length ?? springs;
+  const largest = Math.max(0, ...analysis.displacements.map((node) => Math.max(Math.abs(node.ux), Math.abs(node.uy), Math.abs(node.uz))));
+  const contact = springs > 0 ? `, with ${pressing} of ${springs} bearing points pressing` : '';
+  throw new DesignError(
+    'GUARD_FAILED',
+    `equilibrium guard: in ${analysis.combination} / ${scenario} the reactions do not balance the loads along ${'XYZ'[axis]} (imbalance ${imbalance.toExponential(3)} N of ${scale.toExponential(3)} N; largest displacement ${largest.toExponential(2)} m${contact}): the contact state is a near-mechanism and its solution cannot be trusted; if the bin lifts off under this combination it must be held down (anchors) or be heavier`,
+  );
+}
+
 export function sizingCombinations(loads: LoadSet): Set<string> {
   return new Set(loads.combinations.filter((combination) => combination.limitState === 'ULS' && combination.verification !== 'EQU').map((combination) => combination.name));
 }
@@ -887,7 +887,7 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     const stiffenerEnvelopes = finalEnvelopes.filter(isStiffenerCheck);
     const stiffenerGoverning = governingEnvelope(stiffenerEnvelopes);
     if (!stiffenerGoverning) throw new DesignError('ANALYSIS_FAILED', 'no check was evaluated for the bearing stiffeners');
-    const pair = stiffenerPair === 'too narrow' ? undefined : stiffenerPair;
+    const pair = stiffenerEnvelopes.some((envelope) => envelope.check.outOfScope !== undefined) ? undefined : stiffenerPair;
     const webDepth = final.section.dimensions.depth - 2 * final.section.dimensions.flangeThickness;
     const stiffenerLength = layout.columns * 2 * webDepth;
     const stiffenerMass = bearingStiffenerMass(final.section, spec, layout);
@@ -1080,7 +1080,8 @@ function designGuards(
 ): GuardReport {
   const { spec, layout } = context;
   const items = final.allScenarios.flatMap(({ scenario, model, analyses }) => analyses.map((analysis) => ({ scenario: scenario.id, model, analysis })));
-  const equilibrium = { analyses: items.length, largestImbalance: Math.max(0, ...items.map(({ scenario, analysis }) => guardEquilibrium(analysis, scenario))), tolerance: RELATIVE_EQUILIBRIUM_TOLERANCE };
+  // Every analysis was guarded as it was made (analyseScenario); here only the largest imbalance is reported.
+  const equilibrium = { analyses: items.length, largestImbalance: Math.max(0, ...items.map(({ analysis }) => relativeImbalance(analysis).relative)), tolerance: RELATIVE_EQUILIBRIUM_TOLERANCE };
   const contact = contactGuard(items);
 
   const fresh: DesignContext = { ...designContext(spec, context.stationsPerElement, context.serviceability), column: context.column };

@@ -192,23 +192,21 @@ export const STIFFENER_TIP_SETBACK = 0.01;
 /**
  * The bearing stiffener pair of a section over the column caps, from support.bearingStiffeners: the
  * given width, or the flange outstand (b - t_w)/2 less STIFFENER_TIP_SETBACK. Undefined without
- * stiffeners (or on a slab); 'too narrow' when the outstand leaves no bearing width past the chamfer.
+ * stiffeners (or on a slab). A pair that does not fit the flange is refused by its checks (steel).
  */
-export function bearingStiffenerOf(section: SteelSection, spec: BinSpec, layout: RingLayout): BearingStiffenerPair | 'too narrow' | undefined {
+export function bearingStiffenerOf(section: SteelSection, spec: BinSpec, layout: RingLayout): BearingStiffenerPair | undefined {
   const stiffeners = spec.support.bearingStiffeners;
   if (!stiffeners || layout.kind === 'slab') return undefined;
   const outstand = (section.dimensions.flangeWidth - section.dimensions.webThickness) / 2;
-  const width = stiffeners.width ?? outstand - STIFFENER_TIP_SETBACK;
-  if (width > outstand + 1e-9 || width <= stiffeners.chamfer) return 'too narrow';
-  return { width, thickness: stiffeners.thickness, chamfer: stiffeners.chamfer };
+  return { width: stiffeners.width ?? outstand - STIFFENER_TIP_SETBACK, thickness: stiffeners.thickness, chamfer: stiffeners.chamfer };
 }
 
 /** Steel of the bearing stiffeners of one girder: a pair over each column, full web depth, kg. */
 export function bearingStiffenerMass(section: SteelSection, spec: BinSpec, layout: RingLayout): number {
   const pair = bearingStiffenerOf(section, spec, layout);
-  if (pair === undefined || pair === 'too narrow') return 0;
+  if (!pair) return 0;
   const webDepth = section.dimensions.depth - 2 * section.dimensions.flangeThickness;
-  return layout.columns * 2 * pair.width * pair.thickness * webDepth * spec.bin.steelDensity;
+  return layout.columns * 2 * Math.max(0, pair.width) * pair.thickness * webDepth * spec.bin.steelDensity;
 }
 
 /**
@@ -216,29 +214,10 @@ export function bearingStiffenerMass(section: SteelSection, spec: BinSpec, layou
  * web line load one stiffener, those outside the other, a point on the web line both equally; a point
  * support under the web loads both equally.
  */
-function stiffenerChecks(section: SteelSection, grade: SteelGrade, pair: BearingStiffenerPair | 'too narrow', layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+function stiffenerChecks(section: SteelSection, grade: SteelGrade, pair: BearingStiffenerPair, layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
   const points = bearingPoints(item.model, item.analysis);
   for (const column of columnReactions(item.model, item.analysis, layout)) {
     const station = stationAtNode(item.model, item.analysis, column.node);
-    if (pair === 'too narrow') {
-      const outstand = (section.dimensions.flangeWidth - section.dimensions.webThickness) / 2;
-      keepWorst(
-        worst,
-        {
-          id: 'stiffener-bearing',
-          title: 'Bearing stiffener: fitted end in bearing (each side)',
-          clause: 'EN 1993-1-5 9.1',
-          utilisation: Number.POSITIVE_INFINITY,
-          inputs: { column: column.index + 1, outstand },
-          intermediate: {},
-          outOfScope: `the flange outstand of ${section.designation} (${(outstand * 1000).toFixed(0)} mm) leaves no bearing width for a stiffener past its chamfer`,
-        },
-        item.analysis.combination,
-        item.scenario,
-        station,
-      );
-      continue;
-    }
     const cap = points.filter((point) => point.node === column.node && point.group === capGroupId(column.index));
     let inside = 0;
     let outside = 0;

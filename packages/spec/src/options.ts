@@ -10,6 +10,13 @@ import { SpecError, type SpecIssue } from './errors.js';
 import { parseSpecText, readDocumentFile, MAX_SPEC_BYTES } from './read.js';
 import { specSheetFields, type SpecSheetField } from './sheet-fields.js';
 import { asText, inputValue, loadWorkbook, plainValue } from './workbook.js';
+import { setInputPath } from './paths.js';
+
+export { setInputPath };
+
+function clone<T>(value: T): T {
+  return structuredClone(value);
+}
 
 /** Most options one file may expand to (a sweep grid grows fast; a larger study is split into files). */
 export const MAX_OPTIONS = 2000;
@@ -115,7 +122,11 @@ function invalid(issues: SpecIssue[]): never {
 }
 
 /** Input paths of the spec and the tables that hold them (for checking an override's path). */
+let known: { fields: Map<string, SpecSheetField>; tables: Set<string> } | undefined;
+
+/** Built once: the schema does not change while the program runs. */
 function knownPaths(): { fields: Map<string, SpecSheetField>; tables: Set<string> } {
+  if (known) return known;
   const fields = new Map(specSheetFields().map((field) => [field.path, field]));
   const tables = new Set<string>();
   for (const path of fields.keys()) {
@@ -123,7 +134,8 @@ function knownPaths(): { fields: Map<string, SpecSheetField>; tables: Set<string
     for (let i = 1; i < parts.length; i++) tables.add(parts.slice(0, i).join('.'));
   }
   tables.add('equipment');
-  return { fields, tables };
+  known = { fields, tables };
+  return known;
 }
 
 /** The schema path of an input path: `equipment[2].force` -> `equipment[].force`. */
@@ -141,39 +153,6 @@ function checkPath(path: string, where: string): void {
   const head = path.split('.')[0] ?? '';
   const near = [...fields.keys()].filter((candidate) => candidate.startsWith(`${head.replace(/\[\d+\]$/, '[]')}.`)).slice(0, 12);
   invalid([{ path: where, message: `${where}: '${path}' is not an input of the spec${near.length > 0 ? ` (inputs under ${head}: ${near.join(', ')})` : ''}; see docs/input-reference.md` }]);
-}
-
-function clone<T>(value: T): T {
-  return structuredClone(value);
-}
-
-/** Set (or, with null, remove) the input at a dotted path of a spec document, creating tables on the way. */
-export function setInputPath(document: Record<string, unknown>, path: string, value: unknown): void {
-  const parts = path.split('.').flatMap((part) => {
-    const match = /^([A-Za-z][A-Za-z0-9]*)\[(\d+)\]$/.exec(part);
-    return match ? [match[1] as string, Number(match[2])] : [part];
-  });
-  let node: Record<string, unknown> | unknown[] = document;
-  for (let i = 0; i < parts.length - 1; i++) {
-    const key = parts[i] as string | number;
-    const nextKey = parts[i + 1];
-    const current: unknown = (node as Record<string | number, unknown>)[key];
-    if (typeof current === 'object' && current !== null) {
-      node = current as Record<string, unknown> | unknown[];
-      continue;
-    }
-    if (value === null) return;
-    const created: Record<string, unknown> | unknown[] = typeof nextKey === 'number' ? [] : {};
-    (node as Record<string | number, unknown>)[key] = created;
-    node = created;
-  }
-  const last = parts[parts.length - 1] as string | number;
-  if (value === null) {
-    if (Array.isArray(node) && typeof last === 'number') node.splice(last, 1);
-    else delete (node as Record<string, unknown>)[last as string];
-  } else {
-    (node as Record<string | number, unknown>)[last] = clone(value);
-  }
 }
 
 /** Round a range value to 10 significant figures, so that 0.1 steps give 5.3 rather than 5.300000000000001. */
@@ -280,7 +259,7 @@ async function readBounded(path: string): Promise<Buffer> {
 
 /** A workbook cell of the options sheet as the value the YAML reader would give for that input. */
 function cellInput(path: string, value: string | number | boolean | Date): unknown {
-  const field = specSheetFields().find((candidate) => candidate.path === schemaPathOf(path));
+  const field = knownPaths().fields.get(schemaPathOf(path));
   if (typeof value === 'string' && value.trim().toLowerCase() === 'null') return null;
   return field ? inputValue(field, value) : typeof value === 'string' ? value.trim() : value;
 }

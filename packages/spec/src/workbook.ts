@@ -7,6 +7,7 @@ import type { Cell, CellValue, Workbook, Worksheet } from 'exceljs';
 import { SpecError, type SpecIssue } from './errors.js';
 import { allowedText, specSheetFields, type SpecSheetField } from './sheet-fields.js';
 import { normaliseSpec, type BinSpec } from './spec.js';
+import { setInputPath } from './paths.js';
 
 export const SPEC_SHEET = 'Spec';
 export const README_SHEET = 'Read me';
@@ -219,22 +220,6 @@ export function inputValue(field: SpecSheetField, value: string | number | boole
   }
 }
 
-function setPath(document: Record<string, unknown>, parts: string[], value: unknown): void {
-  let node = document;
-  parts.slice(0, -1).forEach((part) => {
-    const next = node[part];
-    if (typeof next === 'object' && next !== null && !Array.isArray(next)) {
-      node = next as Record<string, unknown>;
-    } else {
-      const created: Record<string, unknown> = {};
-      node[part] = created;
-      node = created;
-    }
-  });
-  const last = parts[parts.length - 1];
-  if (last !== undefined) node[last] = value;
-}
-
 export async function loadWorkbook(bytes: Uint8Array, source: string): Promise<Workbook> {
   const workbook = new ExcelJS.Workbook();
   try {
@@ -310,7 +295,7 @@ export async function readSpecWorkbook(bytes: Uint8Array, source = 'spec.xlsx'):
       entry.rows.set(item[2] ?? '', rowNumber);
       equipment.set(index, entry);
     } else {
-      setPath(document, path.split('.'), converted);
+      setInputPath(document, path, converted);
       rows.set(path, rowNumber);
     }
   }

@@ -184,6 +184,15 @@ describe('bearing stiffeners over a support (EN 1993-1-5 9.1, 9.4), by hand', ()
     expect(buckling?.utilisation).toBeCloseTo(500e3 / NbRd + M / MRd, 10);
   });
 
+  it('a pair that does not fit the flange outstand is out of scope on both checks, with the reason', () => {
+    // IPE 600 outstand (220 - 12)/2 = 104 mm: a 120 mm plate is too wide, a 15 mm one has no bearing past a 15 mm chamfer.
+    for (const width of [0.12, 0.015]) {
+      const results = checkBearingStiffeners(section, grade, { width, thickness: ts, chamfer: c }, { sideA: 1e5, sideB: 1e5 });
+      expect(results.map((result) => result.utilisation)).toEqual([Infinity, Infinity]);
+      expect(results[0]?.outOfScope).toMatch(/does not fit the flange outstand of 104 mm/);
+    }
+  });
+
   it('a slender pair buckles: chi below 1 from curve c', () => {
     const [, slender] = checkBearingStiffeners(rolledSection('HE 1000 B'), grade, { width: 0.04, thickness: 0.006, chamfer: 0.01 }, { sideA: 100e3, sideB: 100e3 });
     const lambda = slender?.intermediate['lambda_bar'] as number;

@@ -297,6 +297,17 @@ export function bearingStiffenerSection(section: ClassifiableSection, grade: Ste
  *    (common practice, conservative).
  */
 export function checkBearingStiffeners(section: ClassifiableSection, grade: SteelGrade, stiffener: BearingStiffenerPair, forces: BearingStiffenerForces): CheckResult[] {
+  // A pair wider than the flange outstand, or with no bearing width past its chamfer, does not fit:
+  // both checks are out of scope (utilisation Infinity) with the reason, rather than an error.
+  const outstand = (section.dimensions.flangeWidth - section.dimensions.webThickness) / 2;
+  if (stiffener.width > outstand * (1 + 1e-9) || stiffener.width <= stiffener.chamfer) {
+    const outOfScope = `a bearing stiffener ${(stiffener.width * 1000).toFixed(0)} mm wide with a ${(stiffener.chamfer * 1000).toFixed(0)} mm chamfer does not fit the flange outstand of ${(outstand * 1000).toFixed(0)} mm`;
+    const unfit = (id: string, title: string, clause: string): CheckResult => ({ id, title, clause, utilisation: Number.POSITIVE_INFINITY, inputs: { b_s: stiffener.width, c: stiffener.chamfer, outstand }, intermediate: {}, outOfScope });
+    return [
+      unfit('stiffener-bearing', 'Bearing stiffener: fitted end in bearing (each side)', 'EN 1993-1-5 9.1; fitted end in bearing (common practice)'),
+      unfit('stiffener-buckling', 'Bearing stiffener: strut out of the plane of the web, with the eccentricity of unequal sides', 'EN 1993-1-5 9.1(2), 9.4(2) (from memory); EN 1993-1-1 6.3.1.2 curve c'),
+    ];
+  }
   const s = bearingStiffenerSection(section, grade, stiffener);
   const sideA = Math.max(0, nonNegativeOrZero(forces.sideA));
   const sideB = Math.max(0, nonNegativeOrZero(forces.sideB));
