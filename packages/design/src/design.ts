@@ -373,9 +373,25 @@ export function serviceabilityCombinations(loads: LoadSet): Set<string> {
   return new Set(loads.combinations.filter((combination) => combination.limitState === 'SLS' && combination.verification === 'SLS-characteristic').map((combination) => combination.name));
 }
 
-/** The combinations a section is checked under: the sizing ULS ones and the SLS characteristic ones. */
-export function designCombinations(loads: LoadSet): Set<string> {
-  return new Set([...sizingCombinations(loads), ...serviceabilityCombinations(loads)]);
+/**
+ * The EQU combinations, when the girder is held down (cap bolts, or anchors on a slab): the
+ * holding-down members take part in the static equilibrium, so they are checked under EQU as well
+ * as STR (EN 1990 6.4.1(1)a, A1.3.1(2)); the other checks stay with STR. Empty otherwise.
+ */
+export function holdingDownCombinations(loads: LoadSet, spec: BinSpec): Set<string> {
+  const heldDown = spec.support.capBolts !== undefined || spec.support.anchorCapacity > 0;
+  if (!heldDown) return new Set();
+  return new Set(loads.combinations.filter((combination) => combination.limitState === 'ULS' && combination.verification === 'EQU').map((combination) => combination.name));
+}
+
+/** The combinations of the force checks: the sizing ULS ones and, for a girder held down, EQU. */
+export function forceCheckCombinations(loads: LoadSet, spec: BinSpec): Set<string> {
+  return new Set([...sizingCombinations(loads), ...holdingDownCombinations(loads, spec)]);
+}
+
+/** The combinations a section is checked under: the sizing ULS ones (with EQU for a girder held down) and the SLS characteristic ones. */
+export function designCombinations(loads: LoadSet, spec: BinSpec): Set<string> {
+  return new Set([...forceCheckCombinations(loads, spec), ...serviceabilityCombinations(loads)]);
 }
 
 /** Every analysed combination of the scenarios, with its model, restricted to the names given. */
@@ -389,7 +405,7 @@ function casesOf(scenarios: ScenarioAnalysis[], names: Set<string>): AnalysedCas
  * under the bearing, the ring under the hopper's pull, anchors. ULS sizing combinations only.
  */
 export function forceEnvelopes(context: DesignContext, section: SteelSection, grade: SteelGrade, scenarios: ScenarioAnalysis[]): CheckEnvelope[] {
-  return [...envelopeChecks(section, grade, ulsStations(context, scenarios)), ...forceChecks(context, section, grade, casesOf(scenarios, sizingCombinations(context.loads)))];
+  return [...envelopeChecks(section, grade, ulsStations(context, scenarios)), ...forceChecks(context, section, grade, casesOf(scenarios, forceCheckCombinations(context.loads, context.spec)))];
 }
 
 /** All checks of the analysed section: the force checks and serviceability from its own displacements. */
@@ -403,7 +419,7 @@ export function sectionEnvelopes(context: DesignContext, section: SteelSection, 
  * first excess. A candidate rejected early gets the utilisation of the check that rejected it (or Infinity from the scan).
  */
 function screenUnderForces(context: DesignContext, section: SteelSection, grade: SteelGrade, state: SectionAnalysis): number {
-  const local = maxUtilisation(forceChecks(context, section, grade, casesOf(state.scenarios, sizingCombinations(context.loads))));
+  const local = maxUtilisation(forceChecks(context, section, grade, casesOf(state.scenarios, forceCheckCombinations(context.loads, context.spec))));
   if (!(local <= 1)) return local;
   return Math.max(local, maxStationUtilisation(section, grade, state.uls));
 }
@@ -477,7 +493,7 @@ function analysisRefusal(model: GirderModel, combinations: LoadSet['combinations
     ? ''
     : scenario.supportType === 'ring-on-slab'
       ? `: under this combination the bin lifts off its bearing${equilibrium}; it must be held down (support.anchorCapacity with the slab-anchored scenario) or be heavier`
-      : `: under this combination the bin lifts off its column caps${equilibrium}; the caps need holding-down bolts, which this tool does not model (docs/limits.md)`;
+      : `: under this combination the bin lifts off its column caps${equilibrium}; the caps need holding-down bolts (support.capBolts, the scenario column-cap-bolted) or the bin must be heavier`;
   return new DesignError('ANALYSIS_FAILED', `analysis under ${scenario.id} with ${section.designation}${where} refused: ${error.message}${advice}`);
 }
 
@@ -489,7 +505,7 @@ function ulsStations(context: DesignContext, scenarios: ScenarioAnalysis[]): Sta
 }
 
 /** Analyse a section under the given scenarios and the design combinations, ULS and SLS (or only those named). */
-export function analyseSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string> = designCombinations(context.loads)): SectionAnalysis {
+export function analyseSection(context: DesignContext, section: SteelSection, scenarios: ScenarioDefinition[], only: Set<string> = designCombinations(context.loads, context.spec)): SectionAnalysis {
   const analysed = scenarios.map((scenario) => analyseScenario(context, section, scenario, only));
   const uls = ulsStations(context, analysed);
   const envelopes = sectionEnvelopes(context, section, context.grade, analysed);
@@ -647,7 +663,13 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
 
   const credible = SCENARIOS.filter((scenario) => spec.support.credibleScenarios.includes(scenario.id));
   const comparison = SCENARIOS.filter(
-    (scenario) => scenario.supportType === spec.support.type && !spec.support.credibleScenarios.includes(scenario.id) && !(scenario.id === 'slab-anchored' && spec.support.anchorCapacity === 0),
+    (scenario) =>
+      scenario.supportType === spec.support.type &&
+      !spec.support.credibleScenarios.includes(scenario.id) &&
+      !(scenario.id === 'slab-anchored' && spec.support.anchorCapacity === 0) &&
+      !(scenario.id === 'column-cap-bolted' && spec.support.capBolts === undefined) &&
+      // With cap bolts the plain bearing is not the detail being designed; it may lift off (a mechanism).
+      !(scenario.id === 'column-cap-contact' && spec.support.capBolts !== undefined),
   );
   progress(`loads: solid ${(loads.totals.solidWeight / 1e3).toFixed(1)} kN, plates ${(loads.totals.structureWeight / 1e3).toFixed(1)} kN, ${loads.combinations.length} combinations`);
   const girderLength = 2 * Math.PI * layout.radius;

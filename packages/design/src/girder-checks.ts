@@ -9,6 +9,8 @@ import { lineLoadAt, type LoadSet } from '@binsupport/loads';
 import type { BinSpec } from '@binsupport/spec';
 import {
   checkAnchorTension,
+  checkBoltedFlangeTension,
+  strengthsForThickness,
   checkDeflection,
   checkBearingStiffeners,
   checkFlangeLocalBending,
@@ -25,6 +27,7 @@ import {
 } from '@binsupport/steel';
 import type { CheckEnvelope } from './evaluate.js';
 import { capGroupId, type RingLayout } from './ring.js';
+import { capBoltLayout } from './scenarios.js';
 
 /** One analysed combination of one scenario, with the model it was analysed on. */
 export interface AnalysedCase {
@@ -348,6 +351,48 @@ function anchorChecks(spec: BinSpec, item: AnalysedCase, worst: Map<string, Chec
   }
 }
 
+/** The scenario whose caps carry the cap bolts (scenarios.ts). */
+const BOLTED_SCENARIO = 'column-cap-bolted';
+
+/**
+ * Cap bolts (scenario column-cap-bolted): at each column, the tension of the bolt line on each side
+ * of the web, max(0, -F) of the cap point at -+gauge, taken by that side's bolts and the flange
+ * outstand as a T-stub (steel checkBoltedFlangeTension, EN 1993-1-8 6.2.4). The flange's f_y and f_u
+ * are those of its thickness (EN 10025-2). The bolts are modelled elastically (no yield), so a
+ * utilisation above 1 is a real excess.
+ */
+function capBoltChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
+  if (item.scenario !== BOLTED_SCENARIO) return;
+  const bolts = spec.support.capBolts;
+  const boltLayout = capBoltLayout(section, spec);
+  if (!bolts || !boltLayout) return;
+  const strengths = strengthsForThickness(grade, section.dimensions.flangeThickness);
+  const points = bearingPoints(item.model, item.analysis);
+  for (let j = 0; j < layout.columns; j++) {
+    const group = capGroupId(j);
+    for (const side of [-1, 1]) {
+      const point = points.find((candidate) => candidate.group === group && Math.abs(candidate.across - side * boltLayout.gauge) < 1e-9);
+      if (!point) continue;
+      const check = checkBoltedFlangeTension({
+        bolt: { size: bolts.size, boltClass: bolts.boltClass },
+        bolts: boltLayout.perSide,
+        tension: Math.max(0, -point.force),
+        gauge: boltLayout.gauge,
+        capLength: spec.support.capPlateLength,
+        flangeWidth: section.dimensions.flangeWidth,
+        flangeThickness: section.dimensions.flangeThickness,
+        webThickness: section.dimensions.webThickness,
+        rootRadius: section.dimensions.rootRadius,
+        flangeYieldStrength: strengths.yieldStrength,
+        flangeUltimateStrength: strengths.ultimateStrength,
+        gammaM0: grade.gammaM0,
+      });
+      const stated: CheckResult = { ...check, title: `${check.title}, ${side < 0 ? 'inner' : 'outer'} bolt line`, inputs: { ...check.inputs, column: j + 1, side } };
+      keepWorst(worst, stated, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, point.node));
+    }
+  }
+}
+
 /**
  * Serviceability of a ring on columns: the deflection of each node relative to the straight line
  * between the two columns of its span (so the column shortening and the cap's bearing settlement do
@@ -397,12 +442,21 @@ export interface GirderCheckContext {
 /**
  * The checks that follow from the forces of analysed cases and hold for any candidate section
  * (reactions, bearing forces and the radial pull do not depend on the candidate being checked):
- * patch loading, flange bending, ring buckling, junction compression, anchors. ULS cases only.
+ * patch loading, flange bending, ring buckling, junction compression, anchors and cap bolts. ULS
+ * cases only; under EQU cases only the anchors and the cap bolts.
  */
 export function forceChecks(context: GirderCheckContext, section: SteelSection, grade: SteelGrade, cases: AnalysedCase[]): CheckEnvelope[] {
   const envelopes: CheckEnvelope[] = [];
+  const equilibrium = new Set(context.loads.combinations.filter((combination) => combination.verification === 'EQU').map((combination) => combination.name));
   for (const item of cases) {
     const worst = new Map<string, CheckEnvelope>();
+    if (equilibrium.has(item.analysis.combination)) {
+      // EQU: only the holding-down members (EN 1990 6.4.1(1)a); the members' strength is STR.
+      anchorChecks(context.spec, item, worst);
+      capBoltChecks(section, grade, context.spec, context.layout, item, worst);
+      envelopes.push(...worst.values());
+      continue;
+    }
     const stiffener = bearingStiffenerOf(section, context.spec, context.layout);
     if (stiffener === undefined) {
       patchLoadingChecks(section, grade, context.spec, context.layout, item, worst);
@@ -414,6 +468,7 @@ export function forceChecks(context: GirderCheckContext, section: SteelSection, 
     ringChecks(section, grade, context.spec, context.loads, context.layout, item, worst);
     lateralTorsionalBucklingChecks(section, grade, context.spec, context.layout, item, worst);
     anchorChecks(context.spec, item, worst);
+    capBoltChecks(section, grade, context.spec, context.layout, item, worst);
     envelopes.push(...worst.values());
   }
   return envelopes;

@@ -50,7 +50,10 @@ export function nodeAngle(layout: RingLayout, index: number): number {
  * flange outstand between the web and the point (a cantilever of the cap length's strip,
  * k = 3 E I / c^3, I = l_cap t_f^3 / 12; common practice). Compression-only springs let the girder
  * roll onto the plate edge as it twists; bilateral ones stand for a bonded (welded or bolted tight)
- * flange.
+ * flange. `boltGauge`: the flange is bolted down on each side of the web at this distance from the
+ * web centre line; two more points stand at +-gauge (the column's stiffness then shared among all
+ * the points), bilateral, since a bolt pulls through the flange outstand as the bearing pushes. The
+ * bolt's own elongation is neglected beside the outstand's bending (common practice).
  */
 export type ColumnSupport =
   | { kind: 'point-under-web' }
@@ -65,7 +68,25 @@ export type ColumnSupport =
       webThickness: number;
       youngsModulus: number;
       flangeFlexibility: boolean;
+      /** distance of each bolt line from the web centre line, m; absent: no cap bolts */
+      boltGauge?: number;
     };
+
+/** Offsets across the flange of a cap's points: `points` spread evenly, plus the bolt lines at +-gauge (merged with a point within 1 mm). */
+export function capPointOffsets(points: number, flangeWidth: number, boltGauge?: number): Array<{ across: number; bolted: boolean }> {
+  const offsets = Array.from({ length: points }, (_, i) => ({ across: -flangeWidth / 2 + (flangeWidth * i) / (points - 1), bolted: false }));
+  if (boltGauge === undefined) return offsets;
+  for (const across of [-boltGauge, boltGauge]) {
+    const near = offsets.find((point) => Math.abs(point.across - across) < 1e-3);
+    if (near) {
+      near.across = across;
+      near.bolted = true;
+    } else {
+      offsets.push({ across, bolted: true });
+    }
+  }
+  return offsets.sort((a, b) => a.across - b.across);
+}
 
 /**
  * How the girder bears on a slab or ring beam all round. At every node, bearing points stand for the
@@ -109,15 +130,15 @@ export function slabSprings(bearing: SlabBearing, tributaryLength: number): Arra
 }
 
 /** Springs of one column cap: their offsets across the flange and stiffnesses (see ColumnSupport). */
-export function capSprings(support: Extract<ColumnSupport, { kind: 'cap-plate' }>, sectionDepth: number): Array<{ across: number; down: number; stiffness: number }> {
+export function capSprings(support: Extract<ColumnSupport, { kind: 'cap-plate' }>, sectionDepth: number): Array<{ across: number; down: number; stiffness: number; behaviour: 'compression-only' | 'bilateral' }> {
   const { points, flangeWidth, flangeThickness, webThickness, capLength, columnAxialStiffness, youngsModulus } = support;
-  const share = columnAxialStiffness / points;
-  return Array.from({ length: points }, (_, i) => {
-    const across = -flangeWidth / 2 + (flangeWidth * i) / (points - 1);
+  const offsets = capPointOffsets(points, flangeWidth, support.boltGauge);
+  const share = columnAxialStiffness / offsets.length;
+  return offsets.map(({ across, bolted }) => {
     const lever = Math.max(Math.abs(across) - webThickness / 2, 0);
     const flange = lever > 0 && support.flangeFlexibility ? (3 * youngsModulus * (capLength * flangeThickness ** 3) / 12) / lever ** 3 : Infinity;
     const stiffness = Number.isFinite(flange) ? 1 / (1 / share + 1 / flange) : share;
-    return { across, down: sectionDepth / 2, stiffness };
+    return { across, down: sectionDepth / 2, stiffness, behaviour: bolted ? 'bilateral' : support.behaviour };
   });
 }
 
@@ -197,7 +218,7 @@ export function buildRingModel(input: RingModelInput): GirderModel {
           direction: [0, 0, 1],
           stiffness: point.stiffness,
           offset: [point.across * outward[0], point.across * outward[1], -point.down],
-          behaviour: column.behaviour,
+          behaviour: point.behaviour,
           group: capGroupId(j),
           tributaryLength: column.capLength,
         });

@@ -34,7 +34,19 @@ function slab(layout: SlabBearing['layout'], behaviour: SlabBearing['behaviour']
   });
 }
 
-function capPlate(behaviour: 'compression-only' | 'bilateral') {
+/**
+ * The bolt lines of the cap bolts on a girder: the gauge from the web centre line, m (the spec's, or
+ * the middle of the flat outstand between the web root and the flange tip), and the bolts each
+ * side; undefined without cap bolts.
+ */
+export function capBoltLayout(girder: SteelSection, spec: BinSpec): { gauge: number; perSide: number } | undefined {
+  const bolts = spec.support.capBolts;
+  if (!bolts) return undefined;
+  const { flangeWidth: b, webThickness: tw, rootRadius: r } = girder.dimensions;
+  return { gauge: bolts.gauge ?? (tw / 2 + r + b / 2) / 2, perSide: bolts.perCap / 2 };
+}
+
+function capPlate(behaviour: 'compression-only' | 'bilateral', bolted = false) {
   return (girder: SteelSection, column: { axialStiffness: number }, spec: BinSpec, grade: SteelGrade): ColumnSupport => ({
     kind: 'cap-plate',
     behaviour,
@@ -46,6 +58,7 @@ function capPlate(behaviour: 'compression-only' | 'bilateral') {
     webThickness: girder.dimensions.webThickness,
     youngsModulus: grade.youngsModulus,
     flangeFlexibility: spec.support.flangeFlexibility,
+    ...(bolted && capBoltLayout(girder, spec) ? { boltGauge: capBoltLayout(girder, spec)?.gauge as number } : {}),
   });
 }
 
@@ -58,6 +71,15 @@ export const SCENARIOS: ScenarioDefinition[] = [
     lesson: 'The realistic assumption: the cap can only push, so the girder rolls about the loaded edge and the column takes the eccentric reaction.',
     supportType: 'ring-on-columns',
     columnSupport: capPlate('compression-only'),
+  },
+  {
+    id: 'column-cap-bolted',
+    title: 'Bolted down on the column caps',
+    description:
+      'The contact bearing points on each cap plate, plus the cap bolts (support.capBolts) each side of the web: the bearing points can only push, the bolt lines push and pull through the flange outstand. The girder can roll only as far as the bolts and the flange let it.',
+    lesson: 'Bolts give the cap a lever against the roll that a plain bearing lacks; the bolts, the flange that they pull and the column below take the tension.',
+    supportType: 'ring-on-columns',
+    columnSupport: capPlate('compression-only', true),
   },
   {
     id: 'column-cap-bonded',

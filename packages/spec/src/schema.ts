@@ -45,9 +45,13 @@ function choice<const T extends readonly [string, ...string[]]>(values: T) {
 
 export const steelGrades = ['S235', 'S275', 'S355', 'S460'] as const;
 export const sectionFamilies = ['IPE', 'HEA', 'HEB', 'HEM'] as const;
+/** Bolt sizes with a tabulated tensile stress area (ISO 898-1), mm. */
+export const boltDiameters = ['M12', 'M16', 'M20', 'M22', 'M24', 'M27', 'M30', 'M36'] as const;
+/** Bolt property classes of EN 1993-1-8 Table 3.1. */
+export const boltClasses = ['4.6', '5.6', '8.8', '10.9'] as const;
 export const wallSurfaceCategories = ['D1', 'D2', 'D3'] as const;
 /** Support scenarios of a ring on columns (docs/input-reference.md, "Support scenarios"). */
-export const supportScenarios = ['column-cap-contact', 'column-cap-bonded', 'columns-under-web', 'slab-contact', 'slab-bonded', 'slab-web-line', 'slab-inner-edge-line', 'slab-anchored'] as const;
+export const supportScenarios = ['column-cap-contact', 'column-cap-bolted', 'column-cap-bonded', 'columns-under-web', 'slab-contact', 'slab-bonded', 'slab-web-line', 'slab-inner-edge-line', 'slab-anchored'] as const;
 
 export const binSpecInput = z.strictObject(
   {
@@ -126,6 +130,33 @@ export const binSpecInput = z.strictObject(
               webThicknesses: z.array(quantity({ min: 4, max: 50, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
             },
             { error: 'must be a table of welded-girder limits (minDepth, maxDepth, minFlangeWidth, maxFlangeWidth in mm)' },
+          )
+          .optional(),
+        weldedBoxes: z
+          .strictObject(
+            {
+              minDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
+              maxDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
+              depthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
+              minFlangeWidth: quantity({ min: 100, max: 1500, unit: 'mm' }),
+              maxFlangeWidth: quantity({ min: 100, max: 1500, unit: 'mm' }),
+              flangeWidthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
+              flangeThicknesses: z.array(quantity({ min: 5, max: 80, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
+              webThicknesses: z.array(quantity({ min: 4, max: 50, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
+              flangeOutstand: quantity({ min: 0, max: 200, unit: 'mm' }).default(20),
+            },
+            { error: 'must be a table of welded-box limits (minDepth, maxDepth, minFlangeWidth, maxFlangeWidth in mm)' },
+          )
+          .optional(),
+        capBolts: z
+          .strictObject(
+            {
+              perCap: wholeNumber(2, 16, 'bolts per column cap'),
+              size: choice(boltDiameters).default('M20'),
+              boltClass: choice(boltClasses).default('8.8'),
+              gauge: quantity({ min: 20, max: 750, unit: 'mm' }).optional(),
+            },
+            { error: 'must be a table describing the bolts that hold the girder down on each column cap (perCap, size, boltClass, gauge)' },
           )
           .optional(),
         bearingPoints: wholeNumber(3, 11, 'bearing points across the flange').default(5),

@@ -52,6 +52,10 @@ export interface BinSpec {
     girderRestraint: 'shell' | 'columns';
     /** Welded plate girders as girder candidates, m (the steel package's WeldedGirderLimits); undefined: rolled only. */
     weldedGirders?: { minDepth: number; maxDepth: number; depthStep: number; minFlangeWidth: number; maxFlangeWidth: number; flangeWidthStep: number; flangeThicknesses?: number[]; webThicknesses?: number[] };
+    /** Welded box girders as girder candidates, m: the welded-girder limits plus the flange outstand beyond each web; undefined: none. */
+    weldedBoxes?: { minDepth: number; maxDepth: number; depthStep: number; minFlangeWidth: number; maxFlangeWidth: number; flangeWidthStep: number; flangeThicknesses?: number[]; webThicknesses?: number[]; flangeOutstand: number };
+    /** Bolts holding the girder's bottom flange down on each column cap: count per cap (half each side of the web), size, class, gauge from the web centre line m (undefined: middle of the flange outstand). */
+    capBolts?: { perCap: number; size: 'M12' | 'M16' | 'M20' | 'M22' | 'M24' | 'M27' | 'M30' | 'M36'; boltClass: '4.6' | '5.6' | '8.8' | '10.9'; gauge?: number };
     bearingPoints: number;
     flangeFlexibility: boolean;
     credibleScenarios: Array<(typeof supportScenarios)[number]>;
@@ -119,6 +123,19 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
   if (support.bearingStiffenerThickness === undefined && support.bearingStiffenerWidth !== undefined) {
     issues.push({ path: 'support.bearingStiffenerWidth', message: 'support.bearingStiffenerWidth needs support.bearingStiffenerThickness (a thickness between 6 and 50 mm) to give bearing stiffeners' });
   }
+  if (support.capBolts && support.type === 'ring-on-slab') {
+    issues.push({ path: 'support.capBolts', message: 'support.capBolts applies to a ring on columns (support.type ring-on-columns); a girder on a slab is held down by support.anchorCapacity' });
+  }
+  if (support.capBolts && support.capBolts.perCap % 2 !== 0) {
+    issues.push({ path: 'support.capBolts.perCap', message: `support.capBolts.perCap must be an even number of bolts (half each side of the web) between 2 and 16; got ${support.capBolts.perCap}` });
+  }
+  const boxes = support.weldedBoxes;
+  if (boxes && boxes.maxDepth < boxes.minDepth) {
+    issues.push({ path: 'support.weldedBoxes.maxDepth', message: `support.weldedBoxes.maxDepth must be at least minDepth (${boxes.minDepth} mm); got ${boxes.maxDepth}` });
+  }
+  if (boxes && boxes.maxFlangeWidth < boxes.minFlangeWidth) {
+    issues.push({ path: 'support.weldedBoxes.maxFlangeWidth', message: `support.weldedBoxes.maxFlangeWidth must be at least minFlangeWidth (${boxes.minFlangeWidth} mm); got ${boxes.maxFlangeWidth}` });
+  }
   const welded = support.weldedGirders;
   if (welded && welded.maxDepth < welded.minDepth) {
     issues.push({ path: 'support.weldedGirders.maxDepth', message: `support.weldedGirders.maxDepth must be at least minDepth (${welded.minDepth} mm); got ${welded.maxDepth}` });
@@ -130,6 +147,9 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
   for (const [index, scenario] of (support.credibleScenarios ?? []).entries()) {
     if (!scenario.startsWith(ownPrefix)) {
       issues.push({ path: `support.credibleScenarios[${index}]`, message: `support.credibleScenarios[${index}] '${scenario}' does not apply to support.type ${support.type}` });
+    }
+    if (scenario === 'column-cap-bolted' && support.capBolts === undefined) {
+      issues.push({ path: 'support.capBolts', message: "support.capBolts must describe the cap bolts (perCap, size, boltClass) for the scenario 'column-cap-bolted'" });
     }
     if (scenario === 'slab-anchored' && support.anchorCapacity === 0) {
       issues.push({ path: 'support.anchorCapacity', message: "support.anchorCapacity must be greater than 0 kN/m for the scenario 'slab-anchored'" });
@@ -208,6 +228,31 @@ export function normaliseSpec(document: unknown): BinSpec {
             },
           }
         : {}),
+      ...(input.support.weldedBoxes
+        ? {
+            weldedBoxes: {
+              minDepth: mmToM(input.support.weldedBoxes.minDepth),
+              maxDepth: mmToM(input.support.weldedBoxes.maxDepth),
+              depthStep: mmToM(input.support.weldedBoxes.depthStep),
+              minFlangeWidth: mmToM(input.support.weldedBoxes.minFlangeWidth),
+              maxFlangeWidth: mmToM(input.support.weldedBoxes.maxFlangeWidth),
+              flangeWidthStep: mmToM(input.support.weldedBoxes.flangeWidthStep),
+              ...(input.support.weldedBoxes.flangeThicknesses ? { flangeThicknesses: input.support.weldedBoxes.flangeThicknesses.map(mmToM) } : {}),
+              ...(input.support.weldedBoxes.webThicknesses ? { webThicknesses: input.support.weldedBoxes.webThicknesses.map(mmToM) } : {}),
+              flangeOutstand: mmToM(input.support.weldedBoxes.flangeOutstand),
+            },
+          }
+        : {}),
+      ...(input.support.capBolts
+        ? {
+            capBolts: {
+              perCap: input.support.capBolts.perCap,
+              size: input.support.capBolts.size,
+              boltClass: input.support.capBolts.boltClass,
+              ...(input.support.capBolts.gauge !== undefined ? { gauge: mmToM(input.support.capBolts.gauge) } : {}),
+            },
+          }
+        : {}),
       ...(input.support.bearingStiffenerThickness !== undefined
         ? {
             bearingStiffeners: {
@@ -219,7 +264,9 @@ export function normaliseSpec(document: unknown): BinSpec {
         : {}),
       bearingPoints: input.support.bearingPoints,
       flangeFlexibility: input.support.flangeFlexibility,
-      credibleScenarios: [...new Set(input.support.credibleScenarios ?? (input.support.type === 'ring-on-slab' ? (['slab-contact'] as const) : (['column-cap-contact'] as const)))],
+      credibleScenarios: [
+        ...new Set(input.support.credibleScenarios ?? (input.support.type === 'ring-on-slab' ? (['slab-contact'] as const) : input.support.capBolts ? (['column-cap-bolted'] as const) : (['column-cap-contact'] as const))),
+      ],
     },
     actions: input.actions,
     optimisation: input.optimisation,

@@ -48,3 +48,5 @@ export { listSections, sectionFamilies } from './catalogue.js';
 export type { SectionFamily, SectionListing } from './catalogue.js';
 export { channelProperties, channelSection, checkChannelSecondaryMember, loadChannels } from './channels.js';
 export type { ChannelDimensions, ChannelProperties, ChannelSection } from './channels.js';
+export { boltGeometry, checkBoltedFlangeTension } from './bolts.js';
+export type { Bolt, BoltClass, BoltedFlangeInput, BoltSize } from './bolts.js';
