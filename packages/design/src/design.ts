@@ -645,7 +645,66 @@ export function optionsFromSpec(spec: BinSpec): DesignOptions {
   };
 }
 
+/** At most this many designs in the column-stiffness iteration (each a whole design). */
+const MAX_COLUMN_ROUNDS = 4;
+
+/**
+ * Design a bin's support, with the column stiffness iterated: the girder model's columns have the
+ * axial stiffness of a column section (first support.columnSection); when the design chooses another
+ * column, the whole design is repeated with the chosen column in the model, until the chosen column
+ * is the model's (a fixed point: every member verified with the stiffness it has) or a column
+ * repeats (a cycle). The result is the least-cost consistent round; without one, the least-cost
+ * round whose chosen pair passed its re-analysis with its own column; else the last round.
+ * `optimisation.columnRounds` lists the rounds when there was more than one.
+ */
 export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}): Promise<DesignOutcome> {
+  const rounds: Array<{ modelColumn: string; outcome: DesignOutcome }> = [];
+  let modelColumn = spec.support.columnSection;
+  const progress = explicit.progress ?? (() => undefined);
+  for (let round = 1; round <= MAX_COLUMN_ROUNDS; round++) {
+    const roundSpec: BinSpec = modelColumn === spec.support.columnSection ? spec : { ...spec, support: { ...spec.support, columnSection: modelColumn } };
+    const outcome = await designWithModelColumn(roundSpec, explicit);
+    rounds.push({ modelColumn, outcome });
+    // The integer program's column (the one-design fallback may have kept the model's instead).
+    const chosen = outcome.result.optimisation.columnStiffness?.chosenColumn ?? outcome.result.members.find((member) => member.id === COLUMN_MEMBER_ID)?.section;
+    if (chosen === undefined || chosen === modelColumn) break;
+    if (rounds.some((entry) => entry.modelColumn === chosen)) {
+      progress(`column stiffness: the chosen ${chosen} columns were already the model's in an earlier round (cycle)`);
+      break;
+    }
+    if (round < MAX_COLUMN_ROUNDS) progress(`column stiffness: the design chose ${chosen} columns, not the model's ${modelColumn}; designing again with ${chosen} in the girder model`);
+    modelColumn = chosen;
+  }
+  if (rounds.length === 1) return (rounds[0] as { outcome: DesignOutcome }).outcome;
+  const columnOf = (outcome: DesignOutcome) => outcome.result.members.find((member) => member.id === COLUMN_MEMBER_ID)?.section;
+  const chosenOf = (outcome: DesignOutcome) => outcome.result.optimisation.columnStiffness?.chosenColumn ?? columnOf(outcome);
+  const verified = rounds.filter((entry) => entry.outcome.result.status === 'verified');
+  // A fixed point: the integer program chose the model's own column.
+  const consistent = verified.filter((entry) => chosenOf(entry.outcome) === entry.modelColumn);
+  // Verified with the stiffness it has: the model's column kept, or the chosen pair passed its re-analysis.
+  const confirmed = verified.filter((entry) => {
+    const stiffness = entry.outcome.result.optimisation.columnStiffness;
+    return stiffness === undefined || stiffness.kept === stiffness.modelColumn || ((stiffness.girderUtilisation ?? Infinity) <= 1 && (stiffness.columnUtilisation ?? Infinity) <= 1);
+  });
+  const cheapest = (list: typeof rounds) => [...list].sort((a, b) => (a.outcome.result.optimisation.objectiveValue ?? Infinity) - (b.outcome.result.optimisation.objectiveValue ?? Infinity))[0];
+  const pick = cheapest(consistent) ?? cheapest(confirmed) ?? (rounds[rounds.length - 1] as (typeof rounds)[number]);
+  const columnRounds = rounds.map((entry) => ({
+    modelColumn: entry.modelColumn,
+    chosenColumn: chosenOf(entry.outcome) ?? null,
+    column: columnOf(entry.outcome) ?? null,
+    status: entry.outcome.result.status,
+    objectiveValue: entry.outcome.result.optimisation.objectiveValue ?? null,
+    steelMass: entry.outcome.result.totals.steelMass,
+  }));
+  const { result } = pick.outcome;
+  const note = `; the column stiffness was iterated over ${rounds.length} designs (${columnRounds.map((entry) => `${entry.modelColumn} in the model, ${entry.chosenColumn ?? 'none'} chosen`).join('; ')}); this design has ${pick.modelColumn} in the girder model`;
+  return {
+    ...pick.outcome,
+    result: { ...result, input: spec, optimisation: { ...result.optimisation, message: `${result.optimisation.message}${note}`, columnRounds } },
+  };
+}
+
+async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Promise<DesignOutcome> {
   const options: DesignOptions = { ...optionsFromSpec(spec), ...explicit };
   const progress = options.progress ?? (() => undefined);
   const maxIterations = options.maxIterations ?? 8;

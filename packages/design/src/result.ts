@@ -239,6 +239,13 @@ export interface OptimisationSummary {
    * that pair fails and the model's column passes, the design keeps the model's column (`kept`).
    */
   columnStiffness?: { modelColumn: string; chosenColumn: string; girderUtilisation: number | null; columnUtilisation: number | null; kept: string };
+  /**
+   * Present when the column stiffness was iterated (the first design chose a column other than
+   * support.columnSection): one entry per whole design, with the column in its girder model, the
+   * column the integer program chose and the column the design kept (`column`). The result is the
+   * least-cost round whose chosen column is its model's.
+   */
+  columnRounds?: Array<{ modelColumn: string; chosenColumn: string | null; column: string | null; status: 'verified' | 'infeasible'; objectiveValue: number | null; steelMass: number }>;
 }
 
 /** Serviceability settings and information (the checks themselves are rows of `utilisations`). */
