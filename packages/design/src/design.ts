@@ -36,6 +36,11 @@ export interface DesignOptions {
   pricePerKg?: Record<string, number>;
   /** Cost added for each distinct (section, grade) pair used, in the units of the price (default 0). */
   costPerDistinctSection?: number;
+  /**
+   * Whole designs in the column-stiffness iteration (default 4, the most; 1: a single design with
+   * support.columnSection in the girder model, as the brute-force tests compare against).
+   */
+  columnStiffnessRounds?: number;
   /** At most this many distinct (section, grade) pairs over the girder and the columns (default: no cap). */
   maxDistinctSections?: number;
   /** Rolled series of the column candidates of a ring on columns (default ['HE B']). */
@@ -661,7 +666,11 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
   const rounds: Array<{ modelColumn: string; outcome: DesignOutcome }> = [];
   let modelColumn = spec.support.columnSection;
   const progress = explicit.progress ?? (() => undefined);
-  for (let round = 1; round <= MAX_COLUMN_ROUNDS; round++) {
+  const maxRounds = explicit.columnStiffnessRounds ?? MAX_COLUMN_ROUNDS;
+  if (!Number.isInteger(maxRounds) || maxRounds < 1 || maxRounds > MAX_COLUMN_ROUNDS) {
+    throw new DesignError('BAD_INPUT', `options.columnStiffnessRounds must be a whole number between 1 and ${MAX_COLUMN_ROUNDS}; got ${maxRounds}`, 'options.columnStiffnessRounds');
+  }
+  for (let round = 1; round <= maxRounds; round++) {
     const roundSpec: BinSpec = modelColumn === spec.support.columnSection ? spec : { ...spec, support: { ...spec.support, columnSection: modelColumn } };
     const outcome = await designWithModelColumn(roundSpec, explicit);
     rounds.push({ modelColumn, outcome });
@@ -672,7 +681,7 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
       progress(`column stiffness: the chosen ${chosen} columns were already the model's in an earlier round (cycle)`);
       break;
     }
-    if (round < MAX_COLUMN_ROUNDS) progress(`column stiffness: the design chose ${chosen} columns, not the model's ${modelColumn}; designing again with ${chosen} in the girder model`);
+    if (round < maxRounds) progress(`column stiffness: the design chose ${chosen} columns, not the model's ${modelColumn}; designing again with ${chosen} in the girder model`);
     modelColumn = chosen;
   }
   if (rounds.length === 1) return (rounds[0] as { outcome: DesignOutcome }).outcome;
