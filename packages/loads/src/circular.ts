@@ -12,7 +12,7 @@ import { squatProfile } from './squat.js';
 import { topSurface } from './surface.js';
 import type { DerivationStep, LoadSet, PressureProfile, SupportLineCase } from './types.js';
 import { requireAngle, requireRange } from './validate.js';
-import { dischargeFactors, patchFactors, patchHeight, thinWalledPatchForce } from './wall.js';
+import { dischargeFactors, patchFactors, patchHeight, thinWalledPatchForce, uniformIncreaseFactor, uniformIncreaseZeta } from './wall.js';
 
 export const STANDARD_GRAVITY = 9.80665; // m/s2
 
@@ -99,6 +99,8 @@ export const SOLID_FILLING_CASE = 'Q_s,f';
 export const SOLID_DISCHARGE_CASE = 'Q_s,e';
 export const FILLING_PATCH_CASE = 'Q_s,pf';
 export const DISCHARGE_PATCH_CASE = 'Q_s,pe';
+export const FILLING_UNIFORM_INCREASE_CASE = 'Q_s,f,u';
+export const DISCHARGE_UNIFORM_INCREASE_CASE = 'Q_s,e,u';
 export const HOPPER_MAGNIFIER_CASE = 'Q_s,b';
 export const ROOF_DEAD_CASE = 'G_roof';
 export const ROOF_IMPOSED_CASE = 'Q_roof';
@@ -129,6 +131,9 @@ function validate(input: CircularBinLoadInput): void {
   requireRange('bin.hopper.thickness', bin.hopper.thickness, 0, bin.diameter / 20, 'm (up to bin.diameter / 20)', { strictLower: true });
   if (bin.hopper.bottomLoadMagnifier !== undefined) requireRange('bin.hopper.bottomLoadMagnifier', bin.hopper.bottomLoadMagnifier, 1, 2, '(dimensionless)');
   requireRange('bin.steelDensity', bin.steelDensity, 1000, 20000, 'kg/m3');
+  if (bin.patchLoadMethod !== undefined && bin.patchLoadMethod !== 'patch' && bin.patchLoadMethod !== 'uniform-increase') {
+    throw new LoadsError('BAD_INPUT', 'bin.patchLoadMethod', `bin.patchLoadMethod must be 'patch' or 'uniform-increase'; got '${String(bin.patchLoadMethod)}'`);
+  }
   requireRange('bin.fillingEccentricity', bin.fillingEccentricity ?? 0, 0, bin.diameter / 2, 'm (inside the bin radius)', { strictUpper: true });
   requireRange('bin.outletEccentricity', bin.outletEccentricity ?? 0, 0, bin.diameter / 2, 'm (inside the bin radius)', { strictUpper: true });
   requireRange('solid.unitWeight', solid.unitWeight, 1000, 30000, 'N/m3');
@@ -196,6 +201,9 @@ function wallProfile(slenderness: SlendernessClass, set: CharacteristicSet, hydr
  * the wall, it does not add weight. The hopper bottom magnifier C_b > 1 is a local overpressure of the
  * hopper: it goes in a case of its own (Q_s,b) so that the symmetric cases still close on the weight.
  * Patch loads and wind reach the support line as global bending of the shell (see `globalBending`).
+ * In AAC 2, `bin.patchLoadMethod: 'uniform-increase'` replaces the patch cases by the substitute
+ * uniform pressure increase (EN 1991-4 5.2.1.4, 5.2.2.4): two further solid states Q_s,f,u and
+ * Q_s,e,u with the wall friction raised by (1 + zeta C_p), still closing on the weight.
  */
 export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
   validate(input);
@@ -245,6 +253,10 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
       throw new LoadsError('BAD_INPUT', 'bin.actionAssessmentClass', `bin.actionAssessmentClass must be at least ${classified.aac} (EN 1991-4 Table 2.1: ${classified.reason}); got ${bin.actionAssessmentClass}`);
     }
     aac = bin.actionAssessmentClass;
+  }
+  const patchLoadMethod = bin.patchLoadMethod ?? 'patch';
+  if (patchLoadMethod === 'uniform-increase' && aac !== 2) {
+    throw new LoadsError('BAD_INPUT', 'bin.patchLoadMethod', `bin.patchLoadMethod 'uniform-increase' is allowed in action assessment class 2 only (EN 1991-4 5.2.1.4, 5.2.2.4); the bin is in class ${aac}: use 'patch'`);
   }
   const thinWalled = dc / bin.wallThickness > 200;
 
@@ -379,8 +391,50 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
     { symbol: 'C_pe', description: 'discharge patch load factor', expression: '0.42 C_op (1 + 2 E^2)(1 - exp(-1.5 (h_c/d_c - 1))), E = 2 e/d_c, e = max(e_f, e_o)', value: patch.Cpe, unit: '-', clause: 'EN 1991-4 5.2.2.2 (from memory)' },
     { symbol: 's', description: 'height of the patch zone', expression: 'pi d_c / 16', value: s, unit: 'm', clause: 'EN 1991-4 5.2.1.2' },
   );
+  // Substitute uniform pressure increase (AAC 2 only, checked above): wall profiles scaled per case.
+  const uniformIncrease: Array<{ name: string; ch: number; cw: number }> = [];
   if (aac === 1) {
     notes.push('AAC 1: patch loads are not applied; the enlarged discharge factors C_h and C_w stand for them (EN 1991-4 5.2.2.1).');
+  } else if (patchLoadMethod === 'uniform-increase') {
+    // EN 1991-4 5.2.1.4, 5.2.2.4 (expressions from memory): p_h,u = (1 + zeta C_p) p_h and
+    // p_w,u = (1 + zeta C_p) p_w at every depth. Axisymmetric, so no global bending of the shell. The
+    // friction resultant is the integral of p_w,u down the wall, so it takes the same factor:
+    // n_z,u(h_c) = (1 + zeta C_p) n_zSk(h_c). The solid still weighs W_s: what the wall carries more,
+    // the hopper carries less (at most the weight in the cylinder goes to the wall), so the vertical
+    // total on the support line is W_s and the inward pull of the hopper falls.
+    const zeta = uniformIncreaseZeta(dc, bin.wallThickness);
+    derivation.push({ symbol: 'zeta', description: 'factor of the substitute uniform pressure increase (replaces the patch loads, AAC 2)', expression: 'max(1, 0.5 + 0.01 d_c/t)', value: zeta, unit: '-', clause: 'EN 1991-4 5.2.1.4 (from memory)' });
+    const increasedCase = (name: string, factor: number, Ch: number, Cw: number, label: string, clause: string) => {
+      if (factor <= 1) return;
+      const nzU = factor * Cw * atW.nzSk;
+      const wallForce = Math.min(U * nzU, solidWeightCylinder);
+      const onHopper = solidWeight - wallForce;
+      const increased: SupportLineCase = {
+        ...uniform(name, `stored solid (${solid.name}) at ${label} with the substitute uniform pressure increase (1 + zeta C_p) of the wall pressures in place of the patch load: wall friction with the maximum-wall-friction properties, the hopper carries the rest of the weight`, 'variable', 'solid', wallForce + onHopper, onHopper * tanB),
+        ...pileHarmonics,
+      };
+      cases.push(increased);
+      uniformIncrease.push({ name, ch: factor * Ch, cw: factor * Cw });
+      const Cp = name === FILLING_UNIFORM_INCREASE_CASE ? 'C_pf' : 'C_pe';
+      const CwText = Cw === 1 ? '' : ' C_w';
+      derivation.push(
+        { symbol: `f_u (${name})`, description: `multiplier of the ${label} wall pressures p_h and p_w`, expression: `1 + zeta ${Cp}`, value: factor, unit: '-', clause },
+        { symbol: `n_z,u(h_c) (${name})`, description: `wall friction force per unit perimeter at the transition, ${label}, increased (max wall friction properties)`, expression: `(1 + zeta ${Cp})${CwText} n_zSk(h_c): integral of p_w,u = (1 + zeta ${Cp})${CwText} p_wf over the wall height`, value: nzU, unit: 'N/m', clause: `${clause}; ${pressureClause} (n_zSk)` },
+        { symbol: `F_w,u (${name})`, description: `solid weight carried by wall friction, ${label}, uniform increase; at most the weight in the cylinder`, expression: 'min(pi d_c n_z,u(h_c), gamma V_cyl)', value: wallForce, unit: 'N', clause: 'statics' },
+        { symbol: `F_h,u (${name})`, description: `solid weight carried by the hopper, ${label}, uniform increase`, expression: 'W_s - F_w,u', value: onHopper, unit: 'N', clause: 'statics' },
+        { symbol: `n_v(${name})`, description: `vertical line load from the solid, ${label}, uniform increase (the weight of the solid)`, expression: '(F_w,u + F_h,u) / (2 pi r_s) = W_s / (2 pi r_s)', value: increased.verticalLineLoad, unit: 'N/m', clause: 'statics' },
+        { symbol: `n_r(${name})`, description: `inward radial pull of the hopper, ${label}, uniform increase`, expression: 'F_h,u tan(beta) / (2 pi r_s)', value: increased.radialLineLoad, unit: 'N/m', clause: 'statics of the hopper meridian' },
+      );
+    };
+    increasedCase(FILLING_UNIFORM_INCREASE_CASE, uniformIncreaseFactor(zeta, patch.Cpf), 1, 1, 'filling', 'EN 1991-4 5.2.1.4 (from memory)');
+    increasedCase(DISCHARGE_UNIFORM_INCREASE_CASE, uniformIncreaseFactor(zeta, patch.Cpe), discharge.Ch, discharge.Cw, 'discharge', 'EN 1991-4 5.2.2.4 (from memory)');
+    if (uniformIncrease.length === 0) {
+      notes.push('AAC 2, substitute uniform pressure increase: C_pf = C_pe = 0 (h_c/d_c <= 1), so there is nothing to increase and no patch case either.');
+    } else {
+      notes.push(
+        'AAC 2, substitute uniform pressure increase in place of the patch loads (EN 1991-4 5.2.1.4, 5.2.2.4; expressions from memory, not yet confirmed against the text): the increase is axisymmetric, so the support line gets no global bending from it, unlike the patch method, whose overturning moment the girder then does not see. The increased wall friction moves load from the hopper to the wall: the vertical total stays the weight of the solid and the inward pull of the hopper is smaller; the cases without the increase (Q_s,f, Q_s,e) stay as alternatives, so the full hopper pull is still checked.',
+      );
+    }
   } else if (!thinWalled) {
     notes.push('Thick-walled bin (d_c/t <= 200): the patch acts outward on two opposite zones and is self-equilibrated, so it puts no resultant on the support line; it matters for the wall only.');
   } else {
@@ -428,7 +482,10 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
   const groups: VariableGroup[] = [];
   const solidFilling = [SOLID_FILLING_CASE, ...cases.filter((c) => c.name === FILLING_PATCH_CASE || c.name === HOPPER_MAGNIFIER_CASE).map((c) => c.name)];
   const solidDischarge = [SOLID_DISCHARGE_CASE, ...cases.filter((c) => c.name === DISCHARGE_PATCH_CASE || c.name === HOPPER_MAGNIFIER_CASE).map((c) => c.name)];
-  groups.push({ action: 'solid', symbol: 'Q_s', alternatives: [{ label: 'filling', cases: solidFilling }, { label: 'discharge', cases: solidDischarge }] });
+  const magnifier = cases.some((c) => c.name === HOPPER_MAGNIFIER_CASE) ? [HOPPER_MAGNIFIER_CASE] : [];
+  // The uniform-increase cases are full solid states (not increments): further alternatives of Q_s.
+  const increasedAlternatives = uniformIncrease.map(({ name }) => ({ label: name === FILLING_UNIFORM_INCREASE_CASE ? 'filling, uniform increase' : 'discharge, uniform increase', cases: [name, ...magnifier] }));
+  groups.push({ action: 'solid', symbol: 'Q_s', alternatives: [{ label: 'filling', cases: solidFilling }, { label: 'discharge', cases: solidDischarge }, ...increasedAlternatives] });
   const roofImposed = input.roof?.imposedLoad ?? 0;
   if (roofImposed > 0) {
     cases.push(uniform(ROOF_IMPOSED_CASE, 'roof imposed load on plan (category H)', 'variable', 'roof', roofImposed * roofArea));
@@ -564,7 +621,7 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
     }
     return profile;
   };
-  const profiles = [wall(SOLID_FILLING_CASE, 1, 1), wall(SOLID_DISCHARGE_CASE, discharge.Ch, discharge.Cw), hopperProfile(SOLID_FILLING_CASE, hopper.filling), hopperProfile(SOLID_DISCHARGE_CASE, hopper.discharge)];
+  const profiles = [wall(SOLID_FILLING_CASE, 1, 1), wall(SOLID_DISCHARGE_CASE, discharge.Ch, discharge.Cw), ...uniformIncrease.map(({ name, ch, cw }) => wall(name, ch, cw)), hopperProfile(SOLID_FILLING_CASE, hopper.filling), hopperProfile(SOLID_DISCHARGE_CASE, hopper.discharge)];
 
   const combinations = combineActions({ permanent: permanentNames, groups, seismic: seismicNames, closure: [PERMANENT_CASE, SOLID_FILLING_CASE] }, input.partialFactors);
 

@@ -33,7 +33,16 @@ export interface CircularBin {
   eccentricityAngle?: number;
   /** Action assessment class chosen by the engineer; may raise, never lower, the class of Table 2.1. */
   actionAssessmentClass?: 1 | 2 | 3;
+  /**
+   * How the unsymmetrical loads of the stored solid are represented: 'patch' (default) for the patch
+   * loads of EN 1991-4 5.2.1.2-5.2.1.3 and 5.2.2.2-5.2.2.3, or 'uniform-increase' for the substitute
+   * uniform pressure increase of 5.2.1.4 and 5.2.2.4, which the standard allows in action assessment
+   * class 2 only (refused in classes 1 and 3).
+   */
+  patchLoadMethod?: PatchLoadMethod;
 }
+
+export type PatchLoadMethod = 'patch' | 'uniform-increase';
 
 export interface CircularBinGeometry {
   radius: number;

@@ -4,19 +4,21 @@ export { characteristicSet, type CharacteristicSet, type LoadEffect, type SolidP
 export { slendernessClass, type SlendernessClass } from './slenderness.js';
 export { actionAssessmentClass, type ActionAssessmentClass, type ClassInput } from './classification.js';
 export { topSurface, type TopSurface } from './surface.js';
-export { dischargeFactors, patchFactors, patchHeight, thinWalledPatchForce, type DischargeFactors } from './wall.js';
+export { dischargeFactors, patchFactors, patchHeight, thinWalledPatchForce, uniformIncreaseFactor, uniformIncreaseZeta, type DischargeFactors } from './wall.js';
 export { hopperPressures, hopperWallVerticalResultant, type HopperParameters, type HopperPressures, type HopperPressureSet, type HopperState } from './hopper.js';
 export { cylinderForceCoefficient, effectiveSlenderness, endEffectFactor, peakVelocityPressure, roofShapeCoefficient, TERRAIN, type PeakVelocityPressure, type TerrainCategory } from './climate.js';
-export { circularBinGeometry, type CircularBin, type CircularBinGeometry } from './geometry.js';
+export { circularBinGeometry, type CircularBin, type CircularBinGeometry, type PatchLoadMethod } from './geometry.js';
 export {
   circularBinLoads,
   isGravityCase,
   seismicCaseName,
   windCaseName,
   DISCHARGE_PATCH_CASE,
+  DISCHARGE_UNIFORM_INCREASE_CASE,
   EQUIPMENT_PERMANENT_CASE,
   EQUIPMENT_VARIABLE_CASE,
   FILLING_PATCH_CASE,
+  FILLING_UNIFORM_INCREASE_CASE,
   HOPPER_MAGNIFIER_CASE,
   PERMANENT_CASE,
   ROOF_DEAD_CASE,

@@ -100,6 +100,35 @@ describe('support-line invariants (fast-check, fixed seed)', () => {
     );
   });
 
+  it('AAC 2 with the uniform pressure increase (EN 1991-4 5.2.1.4, 5.2.2.4, from memory): plates plus each increased solid state weigh what they weigh, the hopper pull is never above filling, no patch cases (0.1 %)', () => {
+    let checked = 0;
+    fc.assert(
+      fc.property(binArbitrary, (p) => {
+        const base = valid(p);
+        fc.pre(base !== undefined && circularBinLoads(base).classification?.actionAssessmentClass === 2);
+        if (!base) return;
+        const loads = circularBinLoads({ ...base, bin: { ...base.bin, patchLoadMethod: 'uniform-increase' } });
+        const weight = loads.totals.solidWeight + loads.totals.structureWeight;
+        const names = loads.cases.map((c) => c.name);
+        expect(names).not.toContain('Q_s,pf');
+        expect(names).not.toContain('Q_s,pe');
+        const filling = loads.cases.find((c) => c.name === 'Q_s,f');
+        for (const solidCase of ['Q_s,f,u', 'Q_s,e,u']) {
+          const c = loads.cases.find((x) => x.name === solidCase);
+          if (!c) continue; // C_p = 0 (h_c/d_c <= 1): nothing to increase
+          checked++;
+          expect(isGravityCase(c)).toBe(true);
+          const sum = ['G', solidCase].map((name) => loads.cases.find((x) => x.name === name)).reduce((s, x) => s + (x ? resultants(x).vertical : Number.NaN), 0);
+          expect(Math.abs(sum / weight - 1)).toBeLessThan(1e-3);
+          // More wall friction leaves less on the hopper (statics of the solid column).
+          expect(c.radialLineLoad).toBeLessThanOrEqual((filling?.radialLineLoad ?? Number.NaN) * (1 + 1e-12));
+        }
+      }),
+      { seed: SEED, numRuns: RUNS },
+    );
+    expect(checked).toBeGreaterThan(RUNS / 2);
+  });
+
   it('overturning cases (wind, seismic, patch) give zero net vertical, the moment they state and the base shear they state', () => {
     fc.assert(
       fc.property(binArbitrary, (p) => {

@@ -77,6 +77,7 @@ export const binSpecInput = z.strictObject(
         fillingEccentricity: quantity({ min: 0, max: 30, unit: 'm' }).default(0),
         outletEccentricity: quantity({ min: 0, max: 30, unit: 'm' }).default(0),
         eccentricityAngle: quantity({ min: -360, max: 360, unit: 'degrees' }).default(0),
+        patchLoadMethod: choice(['patch', 'uniform-increase']).default('patch'),
         wallThickness: quantity({ min: 2, max: 60, unit: 'mm' }),
         hopper: z.strictObject(
           {

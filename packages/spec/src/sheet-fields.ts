@@ -52,6 +52,7 @@ export const fieldNotes: Record<string, FieldNote> = {
   'bin.fillingEccentricity': { unit: 'm', note: 'Eccentricity of the filling point from the bin axis.' },
   'bin.outletEccentricity': { unit: 'm', note: 'Eccentricity of the outlet from the bin axis.' },
   'bin.eccentricityAngle': { unit: degrees, note: 'Direction of the eccentricities, from +X counter-clockwise seen from above.' },
+  'bin.patchLoadMethod': { unit: '', note: 'Unsymmetrical solid loads: patch loads, or (action assessment class 2 only) the substitute uniform pressure increase of EN 1991-4 5.2.1.4 / 5.2.2.4 (its expressions are from memory, not yet confirmed).' },
   'bin.wallThickness': { unit: 'mm', note: 'Cylinder plate thickness.' },
   'bin.hopper.apexHalfAngle': { unit: degrees, note: 'Hopper half angle beta, from the vertical.' },
   'bin.hopper.outletDiameter': { unit: 'm', note: 'Outlet diameter (concentric outlet); less than 0.9 bin.diameter.' },

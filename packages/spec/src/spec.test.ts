@@ -36,6 +36,17 @@ describe('normaliseSpec', () => {
     expect(spec.actions).toEqual({ permanentFactor: 1.35, solidFactor: 1.5, variableFactor: 1.5, combinationMethod: '6.10' });
     expect(spec.equipment).toEqual([]);
     expect(spec.wind).toBeUndefined();
+    expect(spec.bin.patchLoadMethod).toBe('patch');
+    expect(spec.support.capBolts).toBeUndefined();
+  });
+
+  it('converts the cap bolts and the welded-box limits to SI, and makes the bolted scenario credible', () => {
+    const spec = normaliseSpec({ ...minimal, support: { columns: 8, capBolts: { perCap: 4, gauge: 90 }, weldedBoxes: { minDepth: 400, maxDepth: 600, minFlangeWidth: 300, maxFlangeWidth: 400 } } });
+    expect(spec.support.capBolts).toEqual({ perCap: 4, size: 'M20', boltClass: '8.8', gauge: 0.09 });
+    expect(spec.support.credibleScenarios).toEqual(['column-cap-bolted']);
+    expect(spec.support.weldedBoxes?.flangeOutstand).toBeCloseTo(0.02, 12);
+    expect(spec.support.weldedBoxes?.maxFlangeWidth).toBeCloseTo(0.4, 12);
+    expect(() => normaliseSpec({ ...minimal, bin: { ...minimal.bin, patchLoadMethod: 'even' } })).toThrowError('bin.patchLoadMethod must be one of patch, uniform-increase');
   });
 
   it('takes wheat from EN 1991-4 Table E.1 (upper unit weight 9.0 kN/m3, K_m 0.54, mu_m D2 0.38)', () => {

@@ -22,6 +22,8 @@ export interface BinSpec {
     topSurface: 'level' | 'pile';
     fillingEccentricity: number;
     outletEccentricity: number;
+    /** Patch loads (EN 1991-4 5.2.1.2, 5.2.2.2) or, in action assessment class 2 only, the substitute uniform increase (5.2.1.4, 5.2.2.4). */
+    patchLoadMethod: 'patch' | 'uniform-increase';
     /** Direction of the eccentricities from +X, rad. */
     eccentricityAngle: number;
     hopper: { apexHalfAngle: number; outletDiameter: number; thickness: number };
@@ -191,6 +193,7 @@ export function normaliseSpec(document: unknown): BinSpec {
       topSurface: input.bin.topSurface,
       fillingEccentricity: input.bin.fillingEccentricity,
       outletEccentricity: input.bin.outletEccentricity,
+      patchLoadMethod: input.bin.patchLoadMethod,
       eccentricityAngle: degToRad(input.bin.eccentricityAngle),
       wallThickness,
       hopper: {
