@@ -51,7 +51,7 @@ describe('cap bolts in tension and the bolted flange as a T-stub (EN 1993-1-8)',
     // Per bolt: F_t,Rd = 141.1 kN; B_p,Rd = 0.6 pi d_m t_f f_u / gamma_M2 with d_m = (30 + 34.64)/2
     // = 32.32 mm: 0.6 pi 0.03232 0.019 470e6 / 1.25 = 435.2 kN, so the bolt governs.
     const Bt = (0.9 * 800e6 * 245e-6) / 1.25;
-    expect(result.intermediate.BpRd / 1e3).toBeCloseTo((0.6 * Math.PI * 0.032321 * 0.019 * 470e6) / 1.25 / 1e3, 0);
+    expect((result.intermediate.BpRd ?? Number.NaN) / 1e3).toBeCloseTo((0.6 * Math.PI * 0.032321 * 0.019 * 470e6) / 1.25 / 1e3, 0);
     const mode1 = (4 * Mpl) / m;
     const mode2 = (2 * Mpl + n * 2 * Bt) / (m + n);
     const mode3 = 2 * Bt;
@@ -60,7 +60,7 @@ describe('cap bolts in tension and the bolted flange as a T-stub (EN 1993-1-8)',
     expect(result.intermediate.FT3Rd).toBeCloseTo(mode3, 6);
     // mode 1 = 4 x 15.695 / 0.0729 = 861 kN; mode 2 = (31.39 + 14.11) / 0.1229 = 370 kN; mode 3 =
     // 2 x 141.1 = 282.2 kN: the thick HE B flange leaves the bolts to govern.
-    expect(result.intermediate.FT2Rd / 1e3).toBeCloseTo(370.2, 0);
+    expect((result.intermediate.FT2Rd ?? Number.NaN) / 1e3).toBeCloseTo(370.2, 0);
     expect(result.intermediate.governingMode).toBe(3);
     expect(result.utilisation).toBeCloseTo(150e3 / Math.min(mode1, mode2, mode3), 10);
   });

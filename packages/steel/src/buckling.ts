@@ -4,7 +4,7 @@ import type { CheckResult } from './checks.js';
 import { SteelError } from './errors.js';
 import type { SteelGrade } from './grades.js';
 
-/** A doubly symmetric I/H section for member checks; `fabrication` defaults to 'rolled'. */
+/** A doubly symmetric I/H section or welded box for member checks; `fabrication` defaults to 'rolled'. */
 export type MemberSection = ClassifiableSection;
 export type { Fabrication };
 
@@ -93,9 +93,11 @@ export interface LateralTorsionalBucklingOptions {
  * Buckling curve for lateral-torsional buckling, EN 1993-1-1 Table 6.4 (general: rolled I h/b <= 2 a,
  * > 2 b; welded I <= 2 c, > 2 d; from memory) and Table 6.5 (6.3.2.3: rolled I h/b <= 2 b, > 2 c;
  * welded I <= 2 c, > 2 d; rolled limits confirmed in Steel Buildings in Europe, Part 10, section 5).
- * Sections outside these shapes should use curve d of 6.3.2.2 (not offered here: I sections only).
+ * Sections outside these shapes use curve d, Table 6.4 "other cross-sections": a welded box gets d by either
+ * method (6.3.2.3 is written for I sections; a box's M_cr is so high that chi_LT is 1 or close to it).
  */
 export function lateralTorsionalBucklingCurve(section: MemberSection, method: 'general' | 'rolled'): BucklingCurve {
+  if (section.box) return 'd';
   const { depth: h, flangeWidth: b } = section.dimensions;
   const welded = (section.fabrication ?? 'rolled') === 'welded';
   const slender = h / b > 2;
@@ -261,9 +263,13 @@ export interface ColumnBucklingOptions {
  * rolled, h/b > 1.2: t_f <= 40 mm y a / z b (S460: a0 / a0); 40 < t_f <= 100 mm y b / z c (S460: a / a);
  * rolled, h/b <= 1.2: t_f <= 100 mm y b / z c (S460: a / a); t_f > 100 mm d / d (S460: c / c);
  * welded: t_f <= 40 mm y b / z c; t_f > 40 mm y c / z d.
+ * Welded box (same table, from memory): b about both axes generally; c about both with thick welds
+ * (throat a > 0.5 t_f) when b / t_f < 30 and h / t_w < 30. The weld throat is not part of the section
+ * model, so c is taken whenever the two slenderness conditions hold.
  */
 export function flexuralBucklingCurve(section: MemberSection, grade: SteelGrade, axis: 'y' | 'z'): BucklingCurve {
   const { depth: h, flangeWidth: b, flangeThickness: tf } = section.dimensions;
+  if (section.box) return b / tf < 30 && h / section.dimensions.webThickness < 30 ? 'c' : 'b';
   const s460 = grade.name === 'S460';
   if ((section.fabrication ?? 'rolled') === 'welded') {
     if (tf <= 0.04 + 1e-12) return axis === 'y' ? 'b' : 'c';

@@ -199,13 +199,24 @@ describe('check behaviour', () => {
 
 describe('sectionUtilisations (the scan used over many stations)', () => {
   // Equality with checkSection is the contract: the scan decides which station governs, checkSection
-  // then reports it. Random forces over rolled sections and a slender welded web (shear-buckling and
-  // class 4 paths), with a fixed seed.
+  // then reports it. Random forces over rolled sections, a slender welded web (shear-buckling and
+  // class 4 paths) and welded boxes (typical, slender-webbed, flush-webbed and stocky), with a fixed seed.
   it('gives exactly the utilisations of checkSection, check by check, in SECTION_CHECK_IDS order', async () => {
     const { SECTION_CHECK_IDS, sectionUtilisations } = await import('./checks.js');
     const { weldedISection } = await import('./welded.js');
+    const { weldedBoxSection } = await import('./box.js');
     // The welded girder (h_w/t_w ~ 196, c/t of the flange ~ 12) is class 4 and needs shear buckling.
-    const sections = [rolledSection('IPE 300'), rolledSection('HE 300 B'), rolledSection('IPE 600'), rolledSection('HE 1000 M'), weldedISection({ depth: 1.2, flangeWidth: 0.3, flangeThickness: 0.012, webThickness: 0.006 })];
+    const sections = [
+      rolledSection('IPE 300'),
+      rolledSection('HE 300 B'),
+      rolledSection('IPE 600'),
+      rolledSection('HE 1000 M'),
+      weldedISection({ depth: 1.2, flangeWidth: 0.3, flangeThickness: 0.012, webThickness: 0.006 }),
+      weldedBoxSection({ depth: 0.6, flangeWidth: 0.3, webThickness: 0.01, flangeThickness: 0.02, flangeOutstand: 0.02 }),
+      weldedBoxSection({ depth: 1.2, flangeWidth: 0.5, webThickness: 0.006, flangeThickness: 0.012, flangeOutstand: 0.02 }),
+      weldedBoxSection({ depth: 0.4, flangeWidth: 0.4, webThickness: 0.012, flangeThickness: 0.025, flangeOutstand: 0 }),
+      weldedBoxSection({ depth: 0.3, flangeWidth: 0.3, webThickness: 0.015, flangeThickness: 0.03, flangeOutstand: 0.03 }),
+    ];
     const grades = ['S235', 'S355', 'S460'].map((name) => steelGrade(name));
     let seed = 12345;
     const random = (): number => {
@@ -216,6 +227,7 @@ describe('sectionUtilisations (the scan used over many stations)', () => {
     const out = new Float64Array(SECTION_CHECK_IDS.length);
     let compared = 0;
     let outOfScope = 0;
+    let boxes = 0;
     for (let i = 0; i < 3000; i++) {
       const section = sections[i % sections.length] as (typeof sections)[number];
       const grade = grades[i % grades.length] as (typeof grades)[number];
@@ -225,9 +237,11 @@ describe('sectionUtilisations (the scan used over many stations)', () => {
       expect(reports.map((report) => report.id)).toEqual([...SECTION_CHECK_IDS]);
       reports.forEach((report, k) => expect(out[k], `${report.id} of ${section.designation}`).toBe(report.utilisation));
       compared += 1;
+      if ('box' in section) boxes += 1;
       if (reports.some((report) => report.outOfScope !== undefined)) outOfScope += 1;
     }
     expect(compared).toBe(3000);
+    expect(boxes).toBeGreaterThan(1000);
     // the out-of-scope paths were exercised, not only the plain ratios
     expect(outOfScope).toBeGreaterThan(100);
   });

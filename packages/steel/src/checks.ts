@@ -1,3 +1,5 @@
+import { boxThinWalled } from './box.js';
+import type { BoxThinWalled } from './box.js';
 import { classifySection } from './classification.js';
 import type { ClassifiableSection, SectionClass } from './classification.js';
 import { SteelError } from './errors.js';
@@ -14,7 +16,9 @@ import { filletGeometry, shearAreaParallelToWeb } from './properties.js';
  *    sigma = N/A + My z / I_y - Mz y / I_z (so My > 0 stretches the +z flange)
  *  - B [N m2], bimoment, B = E I_w phi'' with phi the twist about +x; its normal stress is
  *    sigma = B omega / I_w with the sectorial coordinate omega = y z at the flange mid-planes
- *    (|omega| = W_n0 = h0 b / 4 at the tips; B > 0 stretches the tips at +y+z and -y-z)
+ *    (|omega| = W_n0 = h0 b / 4 at the tips; B > 0 stretches the tips at +y+z and -y-z). For a welded
+ *    box omega is the closed section's sectorial coordinate of boxThinWalled, with the same sign in each
+ *    quadrant as y z.
  */
 export interface InternalForces {
   N: number;
@@ -82,8 +86,12 @@ interface Resistances {
   shearAreaY: number;
   shearResistanceZ: number;
   shearResistanceY: number;
-  torsionShearStress: number;
-  torsionReduction: number;
+  /** tau_t,Ed for the shear-z check (I: the largest St Venant stress; box: Bredt stress in the webs) */
+  torsionShearStressZ: number;
+  /** tau_t,Ed for the shear-y check (I: the same as for z; box: Bredt stress in the flanges) */
+  torsionShearStressY: number;
+  torsionReductionZ: number;
+  torsionReductionY: number;
   shearTorsionResistanceZ: number;
   shearTorsionResistanceY: number;
   rhoZ: number;
@@ -92,6 +100,8 @@ interface Resistances {
   momentShearResistanceZ: number;
   warpingNormalStress: number;
   classMessage: string | undefined;
+  /** thin-walled constants of a welded box; undefined for an I section */
+  thin: BoxThinWalled | undefined;
 }
 
 /** rho of EN 1993-1-1 6.2.8(3)/(4): (2 V_Ed / V_Rd - 1)^2 when V_Ed > 0.5 V_Rd, else 0. */
@@ -110,13 +120,16 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
   if (!Number.isFinite(eta) || eta < 1 || eta > 1.2) {
     throw new SteelError('INVALID_OPTIONS', `eta must lie between 1.0 and 1.2 (EN 1993-1-5 5.1); got ${eta}.`, 'eta');
   }
-  const classification = classifySection(section, grade, { N: forces.N, My: forces.My });
+  const box = section.box;
+  const thin = box ? boxThinWalled(section.dimensions, box) : undefined;
+  // A box's webs are classified for M_z as well (M_z compresses one web); an I's web is on the M_z neutral axis.
+  const classification = classifySection(section, grade, box ? { N: forces.N, My: forces.My, Mz: forces.Mz } : { N: forces.N, My: forces.My });
   const combined = classification.combined;
   const flangeCompressed = forces.N < 0 || forces.My !== 0 || forces.Mz !== 0 || forces.B !== 0;
-  const sectionClass: SectionClass = Math.max(
-    combined ? combined.web.sectionClass : 1,
-    flangeCompressed ? classification.flange.sectionClass : 1,
-  ) as SectionClass;
+  const flangeClass = classification.flangeBetweenWebs
+    ? Math.max(classification.flange.sectionClass, classification.flangeBetweenWebs.sectionClass)
+    : classification.flange.sectionClass;
+  const sectionClass: SectionClass = Math.max(combined ? combined.web.sectionClass : 1, flangeCompressed ? flangeClass : 1) as SectionClass;
   const yieldStrength = classification.yieldStrength;
   const gammaM0 = grade.gammaM0;
   const designStrength = yieldStrength / gammaM0;
@@ -129,8 +142,13 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
   const momentResistanceZ = (plastic ? p.plasticModulusZ : p.elasticModulusZ) * designStrength;
 
   // EN 1993-1-1 6.2.6(2): V_pl,Rd = A_v (f_y / sqrt 3) / gamma_M0.
-  // 6.2.6(3)d for welded I sections (fillet welds ignored): A_v = eta h_w t_w.
-  const shearAreaZ = section.fabrication === 'welded' ? eta * p.webDepth * tw : shearAreaParallelToWeb(section.dimensions, eta);
+  // 6.2.6(3)d for welded I and box sections (fillet welds ignored): A_v = eta sum(h_w t_w), two webs in a box.
+  // For a box A_vy = A - sum(h_w t_w) (6.2.6(3)e), the property shearAreaY.
+  const shearAreaZ = box
+    ? eta * 2 * p.webDepth * tw
+    : section.fabrication === 'welded'
+      ? eta * p.webDepth * tw
+      : shearAreaParallelToWeb(section.dimensions, eta);
   const shearAreaY = p.shearAreaY;
   const shearStrength = designStrength / Math.sqrt(3);
   const shearResistanceZ = shearAreaZ * shearStrength;
@@ -138,10 +156,27 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
 
   // EN 1993-1-1 6.2.7(9), I or H section: V_pl,T,Rd = sqrt(1 - tau_t,Ed / (1.25 (f_y / sqrt 3) / gamma_M0)) V_pl,Rd,
   // with tau_t,Ed = T_sv t_max / I_t, the largest St Venant shear stress of the section.
-  const torsionShearStress = (Math.abs(forces.Tsv) * Math.max(tf, tw)) / p.torsionConstant;
-  const torsionReduction = Math.sqrt(Math.max(0, 1 - torsionShearStress / (1.25 * shearStrength)));
-  const shearTorsionResistanceZ = torsionReduction * shearResistanceZ;
-  const shearTorsionResistanceY = torsionReduction * shearResistanceY;
+  // Structural hollow section (the box): V_pl,T,Rd = (1 - tau_t,Ed / ((f_y / sqrt 3) / gamma_M0)) V_pl,Rd, with the
+  // Bredt stress tau_t,Ed = T_sv / (2 A_m t) in the plates that carry the shear (webs for V_z, flanges for V_y).
+  let torsionShearStressZ: number;
+  let torsionShearStressY: number;
+  let torsionReductionZ: number;
+  let torsionReductionY: number;
+  if (thin) {
+    torsionShearStressZ = Math.abs(forces.Tsv) / (2 * thin.enclosedArea * tw);
+    torsionShearStressY = Math.abs(forces.Tsv) / (2 * thin.enclosedArea * tf);
+    torsionReductionZ = Math.max(0, 1 - torsionShearStressZ / shearStrength);
+    torsionReductionY = Math.max(0, 1 - torsionShearStressY / shearStrength);
+  } else {
+    const torsionShearStress = (Math.abs(forces.Tsv) * Math.max(tf, tw)) / p.torsionConstant;
+    const torsionReduction = Math.sqrt(Math.max(0, 1 - torsionShearStress / (1.25 * shearStrength)));
+    torsionShearStressZ = torsionShearStress;
+    torsionShearStressY = torsionShearStress;
+    torsionReductionZ = torsionReduction;
+    torsionReductionY = torsionReduction;
+  }
+  const shearTorsionResistanceZ = torsionReductionZ * shearResistanceZ;
+  const shearTorsionResistanceY = torsionReductionY * shearResistanceY;
 
   // EN 1993-1-1 6.2.8: high shear reduces the yield strength of the shear area by (1 - rho).
   const rhoZ = shearReductionFactor(forces.Vz, shearTorsionResistanceZ);
@@ -149,11 +184,17 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
   const webArea = p.webDepth * tw;
   // 6.2.8(5), I section with equal flanges, strong axis: M_y,V,Rd = (W_pl,y - rho A_w^2 / (4 t_w)) f_y / gamma_M0.
   // For class 3 the same reduction is applied to the web's elastic modulus t_w h_w^3 / (6 h).
+  // A box has two webs, each reduced alike (6.2.8(3): (1 - rho) f_y on the shear area).
+  const webs = box ? 2 : 1;
   const momentShearResistanceY = Math.min(
     momentResistanceY,
-    Math.max(0, (plastic ? p.plasticModulusY - (rhoZ * webArea * webArea) / (4 * tw) : p.elasticModulusY - (rhoZ * tw * p.webDepth ** 3) / (6 * h)) * designStrength),
+    Math.max(
+      0,
+      (plastic ? p.plasticModulusY - (webs * rhoZ * webArea * webArea) / (4 * tw) : p.elasticModulusY - (webs * rhoZ * tw * p.webDepth ** 3) / (6 * h)) *
+        designStrength,
+    ),
   );
-  // Weak axis: the shear area is the flanges, which give W_pl,z ~ t_f b^2 / 2 (W_el,z ~ t_f b^2 / 3).
+  // Weak axis: the shear area is the flanges, which give W_pl,z ~ t_f b^2 / 2 (W_el,z ~ t_f b^2 / 3); the same for a box.
   const momentShearResistanceZ = Math.min(
     momentResistanceZ,
     Math.max(0, (plastic ? p.plasticModulusZ - (rhoY * tf * b * b) / 2 : p.elasticModulusZ - (rhoY * tf * b * b) / 3) * designStrength),
@@ -162,7 +203,9 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
   const warpingNormalStress = (Math.abs(forces.B) * p.sectorialModulus) / p.warpingConstant;
   const name = section.designation ?? 'section';
   const classMessage =
-    sectionClass === 4
+    sectionClass === 4 && classification.flangeBetweenWebs
+      ? `${name} is class 4 under these forces (EN 1993-1-1 Table 5.2: flange outstand c/t = ${classification.flange.slenderness.toFixed(1)}, flange between webs c/t = ${classification.flangeBetweenWebs.slenderness.toFixed(1)}, web c/t = ${(combined?.web.slenderness ?? 0).toFixed(1)}, eps = ${classification.epsilon.toFixed(3)}); effective widths per EN 1993-1-5 are outside the scope of these checks.`
+      : sectionClass === 4
       ? `${name} is class 4 under these forces (EN 1993-1-1 Table 5.2: flange c/t = ${classification.flange.slenderness.toFixed(1)}, web c/t = ${(combined?.web.slenderness ?? 0).toFixed(1)}, eps = ${classification.epsilon.toFixed(3)}); effective widths per EN 1993-1-5 are outside the scope of these checks.`
       : undefined;
 
@@ -179,8 +222,10 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
     shearAreaY,
     shearResistanceZ,
     shearResistanceY,
-    torsionShearStress,
-    torsionReduction,
+    torsionShearStressZ,
+    torsionShearStressY,
+    torsionReductionZ,
+    torsionReductionY,
     shearTorsionResistanceZ,
     shearTorsionResistanceY,
     rhoZ,
@@ -189,6 +234,7 @@ function resistances(section: CheckableSection, grade: SteelGrade, forces: Inter
     momentShearResistanceZ,
     warpingNormalStress,
     classMessage,
+    thin,
   };
 }
 
@@ -266,11 +312,12 @@ function shearCheck(section: CheckableSection, forces: InternalForces, r: Resist
     },
     intermediate: {
       V_pl_Rd: direction === 'z' ? r.shearResistanceZ : r.shearResistanceY,
-      tau_t_Ed: r.torsionShearStress,
-      torsionReduction: r.torsionReduction,
+      tau_t_Ed: direction === 'z' ? r.torsionShearStressZ : r.torsionShearStressY,
+      torsionReduction: direction === 'z' ? r.torsionReductionZ : r.torsionReductionY,
       V_pl_T_Rd: resistance,
     },
   };
+  if (r.thin) result.inputs['A_m'] = r.thin.enclosedArea;
   if (direction === 'z') {
     const { webSlenderness, limit } = shearBucklingLimit(section, r, eta);
     result.intermediate['h_w/t_w'] = webSlenderness;
@@ -305,7 +352,95 @@ function torsionUtilisation(s: ReturnType<typeof torsionStresses>, r: Resistance
   return Math.max(ratio(s.flangeStVenant + s.warpingShear, shearStrength), ratio(s.webStVenant, shearStrength), ratio(s.warpingNormal, r.designStrength));
 }
 
+/** St Venant (Bredt) and warping stresses of a welded box, per plate, at their largest. */
+interface BoxTorsionStresses {
+  /** T_sv / (2 A_m t_f) */
+  flangeStVenant: number;
+  /** T_sv / (2 A_m t_w) */
+  webStVenant: number;
+  /** T_sv t_f / I_t at the free outstands (the open part twists with the cell) */
+  outstandStVenant: number;
+  /** T_w |S_omega - k| / (I_w t), largest in the flange between the webs, the webs and the outstands */
+  flangeWarpingShear: number;
+  webWarpingShear: number;
+  outstandWarpingShear: number;
+  /** B W_n0 / I_w */
+  warpingNormal: number;
+}
+
+/**
+ * Torsion of the closed cell: the St Venant torque is a shear flow q = T_sv / (2 A_m) round the cell
+ * (Bredt), stress q / t in each plate; it is all given to the cell (the outstands' open share, of order
+ * c t_f^3 / I_t, is neglected there: conservative). Warping shear from boxThinWalled.
+ */
+function boxTorsionStresses(section: CheckableSection, forces: InternalForces, thin: BoxThinWalled): BoxTorsionStresses {
+  const p = section.properties;
+  const { webThickness: tw, flangeThickness: tf } = section.dimensions;
+  const torque = Math.abs(forces.Tsv);
+  const warping = Math.abs(forces.Tw) / thin.warpingConstant;
+  const m = thin.warpingMoment;
+  return {
+    flangeStVenant: torque / (2 * thin.enclosedArea * tf),
+    webStVenant: torque / (2 * thin.enclosedArea * tw),
+    outstandStVenant: (torque * tf) / p.torsionConstant,
+    flangeWarpingShear: (warping * Math.max(m.flangeMid, m.flangeAtWeb)) / tf,
+    webWarpingShear: (warping * Math.max(m.webAtFlange, m.webMid)) / tw,
+    outstandWarpingShear: (warping * m.outstand) / tf,
+    warpingNormal: (Math.abs(forces.B) * p.sectorialModulus) / p.warpingConstant,
+  };
+}
+
+function boxTorsionUtilisation(s: BoxTorsionStresses, r: Resistances): number {
+  const shearStrength = r.designStrength / Math.sqrt(3);
+  return Math.max(
+    ratio(s.flangeStVenant + s.flangeWarpingShear, shearStrength),
+    ratio(s.webStVenant + s.webWarpingShear, shearStrength),
+    ratio(s.outstandStVenant + s.outstandWarpingShear, shearStrength),
+    ratio(s.warpingNormal, r.designStrength),
+  );
+}
+
+/** The torsion utilisation of checkSection for either kind of section. */
+function sectionTorsionUtilisation(section: CheckableSection, forces: InternalForces, r: Resistances): number {
+  return r.thin ? boxTorsionUtilisation(boxTorsionStresses(section, forces, r.thin), r) : torsionUtilisation(torsionStresses(section, forces), r);
+}
+
+function boxTorsionCheck(section: CheckableSection, forces: InternalForces, r: Resistances, thin: BoxThinWalled): CheckResult {
+  const p = section.properties;
+  const s = boxTorsionStresses(section, forces, thin);
+  return {
+    id: 'torsion',
+    title: 'Torsion: St Venant (Bredt shear flow) and warping stresses',
+    clause: 'EN 1993-1-1 6.2.7',
+    utilisation: boxTorsionUtilisation(s, r),
+    inputs: {
+      Tsv: forces.Tsv,
+      Tw: forces.Tw,
+      B: forces.B,
+      A_m: thin.enclosedArea,
+      I_t: p.torsionConstant,
+      I_w: p.warpingConstant,
+      W_n0: p.sectorialModulus,
+      S_w: p.warpingStaticMoment,
+      f_y: r.yieldStrength,
+      gamma_M0: r.gammaM0,
+    },
+    intermediate: {
+      tau_t_flange: s.flangeStVenant,
+      tau_t_web: s.webStVenant,
+      tau_t_outstand: s.outstandStVenant,
+      tau_w_flange: s.flangeWarpingShear,
+      tau_w_web: s.webWarpingShear,
+      tau_w_outstand: s.outstandWarpingShear,
+      sigma_w: s.warpingNormal,
+      tau_Rd: r.designStrength / Math.sqrt(3),
+      sigma_Rd: r.designStrength,
+    },
+  };
+}
+
 function torsionCheck(section: CheckableSection, forces: InternalForces, r: Resistances): CheckResult {
+  if (r.thin) return boxTorsionCheck(section, forces, r, r.thin);
   const p = section.properties;
   const s = torsionStresses(section, forces);
   const shearStrength = r.designStrength / Math.sqrt(3);
@@ -350,6 +485,94 @@ const STRESS_POINT_NAMES = [
   'web at mid-depth',
 ] as const;
 const STRESS_POINT_COUNT = STRESS_POINT_NAMES.length;
+
+/** The critical points of a welded box, in the order of boxStressPointValues. */
+const BOX_STRESS_POINT_NAMES = [
+  'flange tip +y +z',
+  'flange at web +y +z',
+  'web at flange +y +z',
+  'flange tip -y +z',
+  'flange at web -y +z',
+  'web at flange -y +z',
+  'flange between webs +z',
+  'flange tip +y -z',
+  'flange at web +y -z',
+  'web at flange +y -z',
+  'flange tip -y -z',
+  'flange at web -y -z',
+  'web at flange -y -z',
+  'flange between webs -z',
+  'web at mid-depth +y',
+  'web at mid-depth -y',
+] as const;
+const BOX_STRESS_POINT_COUNT = BOX_STRESS_POINT_NAMES.length;
+
+/**
+ * Elastic stresses at the critical points of a welded box, written to `out` as (sigma, tau) pairs in the
+ * order of BOX_STRESS_POINT_NAMES. Normal stress as for the I with the box's omega; normal stress from
+ * M_z at the web's outer face y = b/2 - c. Shear stresses, added by magnitude (conservative):
+ *  - V_z: by symmetry the shear flow is nil at the flange mid-points, so q = V_z S_y / I_y from there;
+ *    each web takes half the flanges' first moment b t_f h0 / 2;
+ *  - V_y: the flow is nil at the webs' mid-depth, so q = V_y S_z / I_z from there;
+ *  - St Venant: Bredt T_sv / (2 A_m t) in the cell, T_sv t_f / I_t in the open outstands;
+ *  - warping: T_w |S_omega - k| / (I_w t) (boxThinWalled).
+ * At a flange next to a web the cell side and the outstand side are both summed and the larger taken.
+ */
+function boxStressPointValues(section: CheckableSection, forces: InternalForces, thin: BoxThinWalled, out: Float64Array): void {
+  const p = section.properties;
+  const { depth: h, flangeWidth: b, webThickness: tw, flangeThickness: tf } = section.dimensions;
+  const h0 = thin.cellHeight;
+  const d = thin.cellWidth;
+  const e = thin.outstandLength;
+  const hw = p.webDepth;
+  // the web's outer face, y = b/2 - c = d/2 + t_w/2
+  const yFace = d / 2 + tw / 2;
+  const t = boxTorsionStresses(section, forces, thin);
+  const warping = Math.abs(forces.Tw) / thin.warpingConstant;
+  const m = thin.warpingMoment;
+  const vz = Math.abs(forces.Vz);
+  const vy = Math.abs(forces.Vy);
+  const sigmaAt = (y: number, z: number, omega: number): number =>
+    forces.N / p.area + (forces.My * z) / p.secondMomentOfAreaY - (forces.Mz * y) / p.secondMomentOfAreaZ + (forces.B * omega) / p.warpingConstant;
+
+  const flangeCellVz = (vz * (d / 2) * (h0 / 2)) / p.secondMomentOfAreaY;
+  const outstandVz = (vz * e * (h0 / 2)) / p.secondMomentOfAreaY;
+  const webTopVz = (vz * ((b * tf * h0) / 4)) / (p.secondMomentOfAreaY * tw);
+  const webMidVz = (vz * ((b * tf * h0) / 4 + (tw * hw * hw) / 8)) / (p.secondMomentOfAreaY * tw);
+  const webFirstMomentZ = tw * (hw / 2) * (d / 2);
+  const webTopVy = (vy * webFirstMomentZ) / (p.secondMomentOfAreaZ * tw);
+  const outstandVy = (vy * (b * b - d * d)) / (8 * p.secondMomentOfAreaZ);
+  const flangeCellVy = (vy * (webFirstMomentZ + (tf * (b * b - d * d)) / 8)) / (p.secondMomentOfAreaZ * tf);
+  const flangeMidVy = (vy * (webFirstMomentZ + (tf * b * b) / 8)) / (p.secondMomentOfAreaZ * tf);
+
+  const tipShear = t.outstandStVenant;
+  const flangeAtWebShear = Math.max(
+    t.flangeStVenant + flangeCellVz + flangeCellVy + (warping * m.flangeAtWeb) / tf,
+    t.outstandStVenant + outstandVz + outstandVy + (warping * m.outstand) / tf,
+  );
+  const webAtFlangeShear = t.webStVenant + webTopVz + webTopVy + (warping * m.webAtFlange) / tw;
+  const flangeMidShear = t.flangeStVenant + flangeMidVy + (warping * m.flangeMid) / tf;
+  const webMidShear = t.webStVenant + webMidVz + (warping * m.webMid) / tw;
+
+  let k = 0;
+  for (const zSign of [1, -1]) {
+    for (const ySign of [1, -1]) {
+      const quadrant = ySign * zSign;
+      out[k++] = sigmaAt((ySign * b) / 2, (zSign * h) / 2, quadrant * thin.sectorialTip);
+      out[k++] = tipShear;
+      out[k++] = sigmaAt(ySign * yFace, (zSign * h) / 2, quadrant * thin.sectorialFlangeAtWebFace);
+      out[k++] = flangeAtWebShear;
+      out[k++] = sigmaAt(ySign * yFace, (zSign * hw) / 2, quadrant * thin.sectorialWebAtFlange);
+      out[k++] = webAtFlangeShear;
+    }
+    out[k++] = sigmaAt(0, (zSign * h) / 2, 0);
+    out[k++] = flangeMidShear;
+  }
+  for (const ySign of [1, -1]) {
+    out[k++] = sigmaAt(ySign * yFace, 0, 0);
+    out[k++] = webMidShear;
+  }
+}
 
 /**
  * Elastic stresses at the critical points of the section, written to `out` as (sigma, tau) pairs in
@@ -397,11 +620,11 @@ function yieldCriterionAt(values: Float64Array, index: number, f: number): numbe
   return ((values[2 * index] as number) / f) ** 2 + 3 * ((values[2 * index + 1] as number) / f) ** 2;
 }
 
-/** The largest criterion over the points and the first point that reaches it. */
-function worstYieldPoint(values: Float64Array, f: number): { criterion: number; index: number } {
+/** The largest criterion over the first `count` points and the first point that reaches it. */
+function worstYieldPoint(values: Float64Array, f: number, count: number): { criterion: number; index: number } {
   let criterion = 0;
   let index = 0;
-  for (let i = 0; i < STRESS_POINT_COUNT; i++) {
+  for (let i = 0; i < count; i++) {
     const value = yieldCriterionAt(values, i, f);
     if (value > criterion) {
       criterion = value;
@@ -411,20 +634,30 @@ function worstYieldPoint(values: Float64Array, f: number): { criterion: number; 
   return { criterion, index };
 }
 
+/** Fill `out` with the (sigma, tau) pairs of the section's critical points; returns their names. */
+function criticalPointStresses(section: CheckableSection, forces: InternalForces, r: Resistances, out: Float64Array): readonly string[] {
+  if (r.thin) {
+    boxStressPointValues(section, forces, r.thin, out);
+    return BOX_STRESS_POINT_NAMES;
+  }
+  stressPointValues(section, forces, out);
+  return STRESS_POINT_NAMES;
+}
+
 function yieldCriterionCheck(section: CheckableSection, forces: InternalForces, r: Resistances): CheckResult {
-  const values = new Float64Array(2 * STRESS_POINT_COUNT);
-  stressPointValues(section, forces, values);
+  const values = new Float64Array(2 * (r.thin ? BOX_STRESS_POINT_COUNT : STRESS_POINT_COUNT));
+  const names = criticalPointStresses(section, forces, r, values);
   const intermediate: Record<string, number> = {};
-  STRESS_POINT_NAMES.forEach((name, index) => {
+  names.forEach((name, index) => {
     intermediate[`sigma_x ${name}`] = values[2 * index] as number;
     intermediate[`tau ${name}`] = values[2 * index + 1] as number;
   });
-  const worst = worstYieldPoint(values, r.designStrength);
+  const worst = worstYieldPoint(values, r.designStrength, names.length);
   intermediate['criterion'] = worst.criterion;
   intermediate['governingPoint'] = worst.index;
   const result: CheckResult = {
     id: 'yield-criterion',
-    title: `Yield criterion at the critical points (governing: ${STRESS_POINT_NAMES[worst.index]})`,
+    title: `Yield criterion at the critical points (governing: ${names[worst.index]})`,
     clause: 'EN 1993-1-1 6.2.1(5)',
     utilisation: Math.sqrt(worst.criterion),
     inputs: { ...forces, f_y: r.yieldStrength, gamma_M0: r.gammaM0 },
@@ -492,7 +725,7 @@ export function checkSection(section: CheckableSection, grade: SteelGrade, force
 /** The ids of the checks of checkSection, in its order (also the order of sectionUtilisations). */
 export const SECTION_CHECK_IDS = ['axial', 'bending-y', 'bending-z', 'shear-z', 'shear-y', 'torsion', 'yield-criterion', 'interaction'] as const;
 
-const scratchStressPoints = new Float64Array(2 * STRESS_POINT_COUNT);
+const scratchStressPoints = new Float64Array(2 * Math.max(STRESS_POINT_COUNT, BOX_STRESS_POINT_COUNT));
 
 /**
  * The utilisations of checkSection, in the order of SECTION_CHECK_IDS, written to `out` without
@@ -512,9 +745,9 @@ export function sectionUtilisations(section: CheckableSection, grade: SteelGrade
   const { webSlenderness, limit } = shearBucklingLimit(section, r, eta);
   out[3] = webSlenderness > limit ? scoped(shearZ, 'shear buckling') : shearZ;
   out[4] = ratio(Math.abs(forces.Vy), r.shearTorsionResistanceY);
-  out[5] = torsionUtilisation(torsionStresses(section, forces), r);
-  stressPointValues(section, forces, scratchStressPoints);
-  out[6] = scoped(Math.sqrt(worstYieldPoint(scratchStressPoints, r.designStrength).criterion), message);
+  out[5] = sectionTorsionUtilisation(section, forces, r);
+  const pointCount = criticalPointStresses(section, forces, r, scratchStressPoints).length;
+  out[6] = scoped(Math.sqrt(worstYieldPoint(scratchStressPoints, r.designStrength, pointCount).criterion), message);
   const terms = interactionTerms(forces, r);
   out[7] = scoped(terms.axialTerm + terms.bendingYTerm + terms.bendingZTerm + terms.bimomentTerm, message);
   return out;

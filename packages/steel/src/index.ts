@@ -44,6 +44,8 @@ export { checkJunctionRingCompression, checkRingInPlaneBuckling, junctionEffecti
 export type { JunctionEffectiveSection, TransitionJunction } from './junction.js';
 export { generateWeldedSections, standardFlangeThicknesses, standardWebThicknesses, weldedISection } from './welded.js';
 export type { WeldedGirderLimits, WeldedPlates, WeldedSection } from './welded.js';
+export { boxThinWalled, defaultBoxFlangeOutstand, generateWeldedBoxes, weldedBoxProperties, weldedBoxSection } from './box.js';
+export type { BoxGeometry, BoxThinWalled, WeldedBoxLimits, WeldedBoxPlates, WeldedBoxSection } from './box.js';
 export { listSections, sectionFamilies } from './catalogue.js';
 export type { SectionFamily, SectionListing } from './catalogue.js';
 export { channelProperties, channelSection, checkChannelSecondaryMember, loadChannels } from './channels.js';

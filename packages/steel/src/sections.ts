@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import rolledSectionTable from './data/rolled-sections.json' with { type: 'json' };
+import type { BoxGeometry } from './box.js';
 import { SteelError } from './errors.js';
 import { sectionProperties } from './properties.js';
 import type { ISectionDimensions, SectionProperties } from './properties.js';
@@ -8,12 +9,15 @@ export type SectionSeries = 'IPE' | 'HE A' | 'HE B' | 'HE M';
 
 /** A rolled section ready for design: SI dimensions, computed properties and where the row came from. */
 export interface SteelSection {
-  /** e.g. "IPE 300", "HE 300 B", or "WI 800x300x10x25" for a welded girder */
+  /** e.g. "IPE 300", "HE 300 B", "WI 800x300x10x25" for a welded girder or "WB 600x400x10x20" for a welded box */
   designation: string;
-  series: SectionSeries | 'welded I';
+  series: SectionSeries | 'welded I' | 'welded box';
   /** 'welded' for a plate girder (its shear area and torsion constant differ); rolled when absent */
   fabrication?: 'rolled' | 'welded';
+  /** for a box, webThickness is that of one web */
   dimensions: ISectionDimensions;
+  /** present for a welded box girder (two webs); absent for an I section */
+  box?: BoxGeometry;
   properties: SectionProperties;
   /** provenance of the dimensions */
   source: string;

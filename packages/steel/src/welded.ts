@@ -68,7 +68,8 @@ export interface WeldedGirderLimits {
 export const standardFlangeThicknesses: readonly number[] = Object.freeze([8, 10, 12, 15, 20, 25, 30, 35, 40].map((t) => t * 1e-3));
 export const standardWebThicknesses: readonly number[] = Object.freeze([6, 8, 10, 12, 15, 20].map((t) => t * 1e-3));
 
-function steps(min: number, max: number, step: number, name: string): number[] {
+/** Lengths from min to max in steps, rounded to 0.1 mm; shared by the welded I and box generators. */
+export function steps(min: number, max: number, step: number, name: string): number[] {
   if (!Number.isFinite(min) || !Number.isFinite(max) || min <= 0 || max < min) {
     throw new SteelError('INVALID_OPTIONS', `${name}: the range ${min} to ${max} m must be positive and increasing.`, name);
   }
