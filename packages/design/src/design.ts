@@ -2,7 +2,7 @@ import { analyseAll, GirderError, type AnalysisResult, type GirderModel, type Se
 import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
 import { solveSelection, tieTolerance, type SelectionCandidate, type SelectionGroup, type SelectionProblem } from '@binsupport/optimiser';
 import type { BinSpec } from '@binsupport/spec';
-import { generateWeldedSections, loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
+import { generateWeldedBoxes, generateWeldedSections, loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
 import { DesignError } from './errors.js';
 import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
@@ -102,7 +102,7 @@ function selectionSetup(context: DesignContext, options: DesignOptions, girderLe
   if (hasColumns && columnCandidates.length === 0) throw new DesignError('BAD_INPUT', 'no column candidates in the chosen series', 'options.columnSeries');
   const columnLength = layout.columns * spec.support.columnHeight;
   const keysMatter = maxDistinctSections !== undefined || costPerDistinctSection > 0;
-  const costObjective = keysMatter || grades.some((grade) => price(grade) !== 1) || (spec.support.weldedGirders !== undefined && spec.optimisation.weldedPriceFactor !== 1);
+  const costObjective = keysMatter || grades.some((grade) => price(grade) !== 1) || ((spec.support.weldedGirders !== undefined || spec.support.weldedBoxes !== undefined) && spec.optimisation.weldedPriceFactor !== 1);
   const keyOf = (section: SteelSection, grade: SteelGrade): string => `${section.designation} ${grade.name}`;
   const gradeAttribute = (grade: SteelGrade): number => Math.round((grade.strengths[0]?.yieldStrength ?? 0) / 1e6);
   // The girder's steel includes its bearing stiffeners, when the spec asks for them (their size follows the section).
@@ -614,26 +614,28 @@ function peaksOf(stations: Station[]): Peaks {
 /** Most welded girders a design considers (each may need its own analysis in the descent). */
 export const MAX_WELDED_CANDIDATES = 800;
 
-/** The welded plate girders within support.weldedGirders (none when not given). */
+/** The welded plate girders within support.weldedGirders and the welded boxes within support.weldedBoxes (none when not given). */
 function weldedCandidates(spec: BinSpec): SteelSection[] {
-  const limits = spec.support.weldedGirders;
-  if (!limits) return [];
-  let sections: SteelSection[];
-  try {
-    sections = generateWeldedSections(limits);
-  } catch (error) {
-    if (error instanceof SteelError) throw new DesignError('BAD_INPUT', `support.weldedGirders: ${error.message}`, 'support.weldedGirders');
-    throw error;
-  }
-  if (sections.length === 0) throw new DesignError('BAD_INPUT', 'support.weldedGirders gives no girder (every depth leaves no web between the flanges, or no web is as thin as a flange)', 'support.weldedGirders');
-  if (sections.length > MAX_WELDED_CANDIDATES) {
-    throw new DesignError(
-      'BAD_INPUT',
-      `support.weldedGirders gives ${sections.length} welded girders; at most ${MAX_WELDED_CANDIDATES} (narrow the depth or width range, take larger steps, or list fewer plate thicknesses)`,
-      'support.weldedGirders',
-    );
-  }
-  return sections;
+  const generated = (path: 'support.weldedGirders' | 'support.weldedBoxes', generate: () => SteelSection[], what: string, empty: string): SteelSection[] => {
+    let sections: SteelSection[];
+    try {
+      sections = generate();
+    } catch (error) {
+      if (error instanceof SteelError) throw new DesignError('BAD_INPUT', `${path}: ${error.message}`, path);
+      throw error;
+    }
+    if (sections.length === 0) throw new DesignError('BAD_INPUT', `${path} gives no ${what} (${empty})`, path);
+    if (sections.length > MAX_WELDED_CANDIDATES) {
+      throw new DesignError('BAD_INPUT', `${path} gives ${sections.length} ${what}s; at most ${MAX_WELDED_CANDIDATES} (narrow the depth or width range, take larger steps, or list fewer plate thicknesses)`, path);
+    }
+    return sections;
+  };
+  const girders = spec.support.weldedGirders;
+  const boxes = spec.support.weldedBoxes;
+  return [
+    ...(girders ? generated('support.weldedGirders', () => generateWeldedSections(girders), 'welded girder', 'every depth leaves no web between the flanges, or no web is as thin as a flange') : []),
+    ...(boxes ? generated('support.weldedBoxes', () => generateWeldedBoxes(boxes), 'welded box', 'every depth leaves no web between the flanges, no two webs fit a flange width, or no web is as thin as a flange') : []),
+  ];
 }
 
 export function optionsFromSpec(spec: BinSpec): DesignOptions {

@@ -165,9 +165,13 @@ export function columnReactions(model: GirderModel, analysis: AnalysisResult, la
  */
 function patchLoadingChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, layout: RingLayout, item: AnalysedCase, worst: Map<string, CheckEnvelope>): void {
   if (layout.kind === 'slab') return;
+  // A box's two webs share the reaction equally (the flange between them spreads it; symmetric
+  // section), each with half the flange width for m1 (EN 1993-1-5 6.5): one web's check.
+  const webs = section.box ? 2 : 1;
+  const perWeb: SteelSection = section.box ? { designation: section.designation, series: section.series, dimensions: { ...section.dimensions, flangeWidth: section.dimensions.flangeWidth / 2 }, properties: section.properties, source: section.source } : section;
   for (const column of columnReactions(item.model, item.analysis, layout)) {
-    const check = checkPatchLoading(section, grade, { force: Math.max(0, column.force), stiffBearingLength: spec.support.capPlateLength, type: 'a' });
-    keepWorst(worst, { ...check, inputs: { ...check.inputs, column: column.index + 1 } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, column.node));
+    const check = checkPatchLoading(perWeb, grade, { force: Math.max(0, column.force) / webs, stiffBearingLength: spec.support.capPlateLength, type: 'a' });
+    keepWorst(worst, { ...check, ...(webs === 2 ? { title: `${check.title}, each of the two webs` } : {}), inputs: { ...check.inputs, column: column.index + 1, webs } }, item.analysis.combination, item.scenario, stationAtNode(item.model, item.analysis, column.node));
   }
 }
 
@@ -199,7 +203,8 @@ export const STIFFENER_TIP_SETBACK = 0.01;
  */
 export function bearingStiffenerOf(section: SteelSection, spec: BinSpec, layout: RingLayout): BearingStiffenerPair | undefined {
   const stiffeners = spec.support.bearingStiffeners;
-  if (!stiffeners || layout.kind === 'slab') return undefined;
+  // The pair of plates is for an I girder's web; a box's webs are checked for patch loading.
+  if (!stiffeners || layout.kind === 'slab' || section.box) return undefined;
   const outstand = (section.dimensions.flangeWidth - section.dimensions.webThickness) / 2;
   return { width: stiffeners.width ?? outstand - STIFFENER_TIP_SETBACK, thickness: stiffeners.thickness, chamfer: stiffeners.chamfer };
 }
@@ -368,6 +373,12 @@ function capBoltChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, 
   if (!bolts || !boltLayout) return;
   const strengths = strengthsForThickness(grade, section.dimensions.flangeThickness);
   const points = bearingPoints(item.model, item.analysis);
+  if (section.box) {
+    // The T-stub with the web as its stem is an I's; a box has no web on its centre line.
+    const station = item.analysis.stations[0];
+    keepWorst(worst, { id: 'cap-bolts', title: 'Cap bolts and bolted flange in tension (T-stub)', clause: 'EN 1993-1-8 6.2.4', utilisation: Number.POSITIVE_INFINITY, inputs: {}, intermediate: {}, outOfScope: 'cap bolts on a box girder are not covered (the T-stub model needs a web on the bolt line\'s side)' }, item.analysis.combination, item.scenario, station);
+    return;
+  }
   for (let j = 0; j < layout.columns; j++) {
     const group = capGroupId(j);
     for (const side of [-1, 1]) {

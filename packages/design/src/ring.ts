@@ -68,6 +68,8 @@ export type ColumnSupport =
       webThickness: number;
       youngsModulus: number;
       flangeFlexibility: boolean;
+      /** distance between the web centre lines of a box girder, m; 0 or absent for an I */
+      webCentreDistance?: number;
       /** distance of each bolt line from the web centre line, m; absent: no cap bolts */
       boltGauge?: number;
     };
@@ -109,7 +111,27 @@ export type SlabBearing = {
   webThickness: number;
   youngsModulus: number;
   flangeFlexibility: boolean;
+  /** distance between the web centre lines of a box girder, m; 0 or absent for an I */
+  webCentreDistance?: number;
 };
+
+/**
+ * Lever of the flange's bending under a bearing point at `across` from the girder centre line, m: the
+ * cantilever length beyond the face of the web (k = 3 E I / c^3). Between the two webs of a box the
+ * flange is a strip fixed at both web faces; a point at a and b from them deflects as a cantilever of
+ * c = a b / L (fixed-fixed beam under a point load, delta = P a^3 b^3 / (3 E I L^3); Roark, beams,
+ * fixed ends, concentrated load).
+ */
+export function flangeLever(across: number, webThickness: number, webCentreDistance = 0): number {
+  const d = Math.abs(across);
+  const face = webCentreDistance / 2 + webThickness / 2;
+  if (d >= face) return d - face;
+  const inner = webCentreDistance / 2 - webThickness / 2;
+  if (inner <= 0 || d >= inner) return 0;
+  const a = inner + across;
+  const b = inner - across;
+  return (a * b) / (a + b);
+}
 
 /** Bearing points of one node on a slab (see SlabBearing): offsets across the flange, stiffnesses. */
 export function slabSprings(bearing: SlabBearing, tributaryLength: number): Array<{ across: number; stiffness: number; tensionCapacity?: number }> {
@@ -122,7 +144,7 @@ export function slabSprings(bearing: SlabBearing, tributaryLength: number): Arra
     // Tributary width of the point across the flange: half a spacing at the tips, a spacing inside.
     const width = (i === 0 || i === n - 1 ? 0.5 : 1) * (b / (n - 1));
     const bearingStiffness = bearingModulus * width * tributaryLength;
-    const lever = Math.max(Math.abs(across) - tw / 2, 0);
+    const lever = flangeLever(across, tw, bearing.webCentreDistance);
     const flange = lever > 0 && bearing.flangeFlexibility ? (3 * youngsModulus * (tributaryLength * tf ** 3) / 12) / lever ** 3 : Infinity;
     const stiffness = Number.isFinite(flange) ? 1 / (1 / bearingStiffness + 1 / flange) : bearingStiffness;
     return { across, stiffness, ...(bearing.behaviour === 'anchored' ? { tensionCapacity: bearing.anchorCapacityPerLength * tributaryLength * (width / b) } : {}) };
@@ -135,7 +157,7 @@ export function capSprings(support: Extract<ColumnSupport, { kind: 'cap-plate' }
   const offsets = capPointOffsets(points, flangeWidth, support.boltGauge);
   const share = columnAxialStiffness / offsets.length;
   return offsets.map(({ across, bolted }) => {
-    const lever = Math.max(Math.abs(across) - webThickness / 2, 0);
+    const lever = flangeLever(across, webThickness, support.webCentreDistance);
     const flange = lever > 0 && support.flangeFlexibility ? (3 * youngsModulus * (capLength * flangeThickness ** 3) / 12) / lever ** 3 : Infinity;
     const stiffness = Number.isFinite(flange) ? 1 / (1 / share + 1 / flange) : share;
     return { across, down: sectionDepth / 2, stiffness, behaviour: bolted ? 'bilateral' : support.behaviour };

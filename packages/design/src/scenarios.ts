@@ -31,6 +31,7 @@ function slab(layout: SlabBearing['layout'], behaviour: SlabBearing['behaviour']
     webThickness: girder.dimensions.webThickness,
     youngsModulus: grade.youngsModulus,
     flangeFlexibility: spec.support.flangeFlexibility,
+    ...(girder.box ? { webCentreDistance: girder.box.webCentreDistance } : {}),
   });
 }
 
@@ -58,6 +59,7 @@ function capPlate(behaviour: 'compression-only' | 'bilateral', bolted = false) {
     webThickness: girder.dimensions.webThickness,
     youngsModulus: grade.youngsModulus,
     flangeFlexibility: spec.support.flangeFlexibility,
+    ...(girder.box ? { webCentreDistance: girder.box.webCentreDistance } : {}),
     ...(bolted && capBoltLayout(girder, spec) ? { boltGauge: capBoltLayout(girder, spec)?.gauge as number } : {}),
   });
 }

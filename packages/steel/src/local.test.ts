@@ -4,6 +4,7 @@ import { checkJunctionRingCompression, checkRingInPlaneBuckling } from './juncti
 import { steelGrade } from './grades.js';
 import { rolledSection } from './sections.js';
 import { sectionProperties } from './properties.js';
+import { weldedBoxSection } from './box.js';
 
 describe('patch loading, EN 1993-1-5 section 6', () => {
   // IPE 300 (EN 10365: h 300, b 150, t_w 7.1, t_f 10.7 mm), S235, unstiffened web, s_s = 50 mm, type a.
@@ -199,5 +200,26 @@ describe('bearing stiffeners over a support (EN 1993-1-5 9.1, 9.4), by hand', ()
     const phi = 0.5 * (1 + 0.49 * (lambda - 0.2) + lambda ** 2);
     expect(lambda).toBeGreaterThan(0.2);
     expect(slender?.intermediate['chi']).toBeCloseTo(1 / (phi + Math.sqrt(phi ** 2 - lambda ** 2)), 12);
+  });
+});
+
+describe('flange local bending of a welded box', () => {
+  // WB 600x400x10x20 with 20 mm outstands: web centre lines 350 mm apart (b - 2c - t_w), S355
+  // (f_y 355 MPa for t <= 40 mm, EN 1993-1-1 Table 3.1), m_pl = t_f^2 f_y / 4 = 0.02^2 x 355e6 / 4 = 35.5 kNm/m.
+  const box = weldedBoxSection({ depth: 0.6, flangeWidth: 0.4, webThickness: 0.01, flangeThickness: 0.02, flangeOutstand: 0.02 });
+  const grade = steelGrade('S355');
+  it('between the webs: a strip fixed at both web faces, collapse load 2 m_pl L / (a b) (virtual work, three hinges)', () => {
+    // Inner faces at +-170 mm (L = 340 mm); a line load at 50 mm from the centre: a = 120, b = 220 mm.
+    const q = 100e3;
+    const check = checkFlangeLocalBending(box, grade, { lineLoad: q, distanceFromWebCentre: 0.05 });
+    const [a, b, L] = [0.12, 0.22, 0.34];
+    expect(check.intermediate.e).toBeCloseTo((a * b) / (2 * L), 12);
+    expect(check.utilisation).toBeCloseTo(q / ((2 * 35.5e3 * L) / (a * b)), 9);
+  });
+  it('beyond a web: the outstand is a cantilever from the web face; over a web, no lever', () => {
+    const check = checkFlangeLocalBending(box, grade, { lineLoad: 50e3, distanceFromWebCentre: 0.2 });
+    expect(check.intermediate.e).toBeCloseTo(0.2 - 0.175 - 0.005, 12);
+    expect(check.utilisation).toBeCloseTo((50e3 * 0.02) / 35.5e3, 9);
+    expect(checkFlangeLocalBending(box, grade, { lineLoad: 50e3, distanceFromWebCentre: 0.175 }).utilisation).toBe(0);
   });
 });

@@ -116,6 +116,23 @@ export interface FlangeContactInput {
  * Per unit length along the girder; no spread along the girder is assumed, which is conservative for
  * a short bearing. The resultant must lie on the flange (d <= b/2).
  */
+/**
+ * The lever of a contact line load on a box flange at d from the box centre line: beyond a web's
+ * outer face the outstand is a cantilever from that face (lever d - w/2 - t_w/2); between the webs'
+ * inner faces the flange is a strip fixed at both, whose plastic collapse under a line load at a and
+ * b from the faces (hinges at both faces and under the load; virtual work) is q = 2 m_pl L / (a b),
+ * i.e. an equivalent lever a b / (2 L); over a web, 0.
+ */
+function boxFlangeLever(d: number, tw: number, webCentreDistance: number): number {
+  const outer = webCentreDistance / 2 + tw / 2;
+  if (d >= outer) return d - outer;
+  const inner = webCentreDistance / 2 - tw / 2;
+  if (d >= inner || inner <= 0) return 0;
+  const a = inner - d;
+  const b = inner + d;
+  return (a * b) / (2 * (a + b));
+}
+
 /** The quantities of checkFlangeLocalBending (shared with flangeLocalBendingUtilisation). */
 function flangeLocalBending(section: ClassifiableSection, grade: SteelGrade, input: FlangeContactInput) {
   const q = nonNegative('lineLoad', Math.abs(input.lineLoad));
@@ -124,8 +141,7 @@ function flangeLocalBending(section: ClassifiableSection, grade: SteelGrade, inp
   if (d > b / 2 * (1 + 1e-9)) {
     throw new SteelError('INVALID_FORCES', `The contact resultant at ${d} m from the web lies beyond the flange tip (b/2 = ${b / 2} m).`, 'distanceFromWebCentre');
   }
-  const root = tw / 2 + r;
-  const lever = Math.max(0, d - root);
+  const lever = section.box ? boxFlangeLever(d, tw, section.box.webCentreDistance) : Math.max(0, d - (tw / 2 + r));
   const fy = strengthsForThickness(grade, tf).yieldStrength;
   const mEd = q * lever;
   const mRd = (tf ** 2 * fy) / (4 * grade.gammaM0);
@@ -142,8 +158,8 @@ export function checkFlangeLocalBending(section: ClassifiableSection, grade: Ste
   const { q, d, b, tw, tf, r, lever, fy, mEd, mRd } = flangeLocalBending(section, grade, input);
   return {
     id: 'flange-local-bending',
-    title: 'Local bending of the flange outstand under contact (cantilever from the web root)',
-    clause: 'common practice: yield line at the web root, m_pl = t_f^2 f_y / 4',
+    title: section.box ? 'Local bending of the box flange under contact (outstand cantilever, or strip fixed at both webs)' : 'Local bending of the flange outstand under contact (cantilever from the web root)',
+    clause: section.box ? 'common practice: yield lines at the web faces (and under the load between the webs), m_pl = t_f^2 f_y / 4' : 'common practice: yield line at the web root, m_pl = t_f^2 f_y / 4',
     utilisation: ratio(mEd, mRd),
     inputs: { q, d, t_f: tf, t_w: tw, r, b, f_y: fy, gamma_M0: grade.gammaM0 },
     intermediate: { e: lever, m_Ed: mEd, m_pl_Rd: mRd },
