@@ -1,4 +1,4 @@
-// Benchmark: the demo option sweep (demo-data/kestrel-options.yaml, 49 options) through
+// Benchmark: the demo option sweep (demo-data/kestrel-options.yaml, 51 options) through
 // `binsupport compare`, as a user runs it, with 2 worker threads and with 1, side by side: wall time,
 // options per second, the speed-up of 2 workers over 1, and whether both wrote the same compare.json.
 // Target (issue: option comparison): at least 48 options in under 60 s on this 2-core machine.
