@@ -4,8 +4,8 @@
 // options, so any split of the list gives the same rows.
 import { createHash } from 'node:crypto';
 import { circularBinGeometry } from '@binsupport/loads';
-import { normaliseSpec, setInputPath, SpecError, type BinSpec, type InputOverride, type OptionCase, type OptionsFile } from '@binsupport/spec';
-import { CAUTIONS, COLUMN_MEMBER_ID, designFromSpec, MEMBER_ID } from './design.js';
+import { normaliseSpec, setInputPath, SpecError, type BinSpec, type CircularBinSpec, type InputOverride, type OptionCase, type OptionsFile } from '@binsupport/spec';
+import { CAUTIONS, circularBinOf, COLUMN_MEMBER_ID, designFromSpec, MEMBER_ID } from './design.js';
 import { DesignError } from './errors.js';
 import { stableJson } from './json.js';
 import { TOOL_NAME, TOOL_VERSION } from './version.js';
@@ -110,7 +110,7 @@ function errorRow(option: OptionCase, overrides: InputOverride[], status: 'inval
 }
 
 /** Volume of the full bin, m3: the cylinder to the top of its wall and the conical hopper (frustum). */
-export function binVolume(bin: BinSpec['bin']): number {
+export function binVolume(bin: CircularBinSpec): number {
   const geometry = circularBinGeometry(bin);
   return geometry.planArea * bin.cylinderHeight + geometry.hopperVolume;
 }
@@ -125,7 +125,7 @@ function withCapacity(option: OptionCase): { document: Record<string, unknown>; 
   if (!option.capacity) return { document, overrides: option.overrides };
   const bin = document['bin'];
   if (typeof bin === 'object' && bin !== null) delete (bin as Record<string, unknown>)['fillHeight'];
-  const probe = normaliseSpec(document).bin;
+  const probe = circularBinOf(normaliseSpec(document));
   const geometry = circularBinGeometry(probe);
   const cylinder = (option.capacity.capacity - geometry.hopperVolume) / geometry.planArea;
   const height = Math.ceil(cylinder / CAPACITY_HEIGHT_STEP - 1e-9) * CAPACITY_HEIGHT_STEP;
@@ -177,7 +177,7 @@ export async function designOption(option: OptionCase): Promise<CompareRow> {
     overrides: prepared.overrides,
     status: result.status,
     message: result.optimisation.message,
-    bin: { diameter: spec.bin.diameter, cylinderHeight: spec.bin.cylinderHeight, capacity: binVolume(spec.bin), solid: spec.solid.name },
+    bin: { diameter: circularBinOf(spec).diameter, cylinderHeight: spec.bin.cylinderHeight, capacity: binVolume(circularBinOf(spec)), solid: spec.solid.name },
     support: { type: result.girder.support, columns: result.girder.support === 'slab' ? 0 : result.girder.columns },
     steelMass: result.totals.steelMass,
     cost: result.optimisation.objectiveValue ?? null,

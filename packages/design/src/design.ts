@@ -1,7 +1,7 @@
 import { analyseAll, GirderError, type AnalysisResult, type GirderModel, type SectionStiffness, type Station } from '@binsupport/girder';
 import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
 import { solveSelection, tieTolerance, type SelectionCandidate, type SelectionGroup, type SelectionProblem } from '@binsupport/optimiser';
-import type { BinSpec } from '@binsupport/spec';
+import type { BinSpec, CircularBinSpec } from '@binsupport/spec';
 import { generateWeldedBoxes, generateWeldedSections, loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
 import { DesignError } from './errors.js';
 import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
@@ -324,10 +324,23 @@ export interface DesignContext {
   serviceability: ServiceabilityLimits;
 }
 
+/**
+ * The circular bin of a spec, for the girder design: the ring girder is built for a circular bin
+ * only. A rectangular bin (a polygon frame on corner columns) is refused with its path; its loads
+ * are derived by `loadsReport` (the `loads` command).
+ */
+export function circularBinOf(spec: BinSpec): CircularBinSpec {
+  if (spec.bin.shape !== 'circular') {
+    throw new DesignError('BAD_INPUT', 'bin.shape rectangular: the girder design covers circular bins on a ring girder only; the support frame of a rectangular bin is not designed yet (binsupport loads derives its loads)', 'bin.shape');
+  }
+  return spec.bin;
+}
+
 export function loadsFor(spec: BinSpec): LoadSet {
+  const bin = circularBinOf(spec);
   try {
     return circularBinLoads({
-      bin: spec.bin,
+      bin,
       solid: spec.solid,
       partialFactors: { permanentFactor: spec.actions.permanentFactor, solidFactor: spec.actions.solidFactor, variableFactor: spec.actions.variableFactor, method: spec.actions.combinationMethod },
       ...(spec.roof ? { roof: spec.roof } : {}),
@@ -665,6 +678,7 @@ const MAX_COLUMN_ROUNDS = 4;
  * `optimisation.columnRounds` lists the rounds when there was more than one.
  */
 export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}): Promise<DesignOutcome> {
+  circularBinOf(spec);
   const rounds: Array<{ modelColumn: string; outcome: DesignOutcome }> = [];
   let modelColumn = spec.support.columnSection;
   const progress = explicit.progress ?? (() => undefined);
@@ -1080,7 +1094,8 @@ async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Pr
     const maxCompression = Math.max(0, ...bearings.map((state) => state?.maxCompression ?? 0));
     return { ...scenarioSummary(scenario, isCredible), utilisation: finiteOrNull(maxUtilisation(envelope)), needsTension: maxTension > 1e-3 * maxCompression, maxBearingTension: maxTension };
   });
-  const geometry = circularBinGeometry(spec.bin);
+  const bin = circularBinOf(spec);
+  const geometry = circularBinGeometry(bin);
   const girderWeight = final.section.properties.massPerMetre * girderLength * STANDARD_GRAVITY;
   const message =
     status === 'verified'
@@ -1099,7 +1114,7 @@ async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Pr
     status,
     cautions: CAUTIONS,
     input: spec,
-    bin: { diameter: spec.bin.diameter, cylinderHeight: spec.bin.cylinderHeight, hopperHeight: geometry.hopperHeight, apexHalfAngle: spec.bin.hopper.apexHalfAngle, solid: spec.solid.name },
+    bin: { diameter: bin.diameter, cylinderHeight: bin.cylinderHeight, hopperHeight: geometry.hopperHeight, apexHalfAngle: bin.hopper.apexHalfAngle, solid: spec.solid.name },
     girder: { kind: 'ring', support: layout.kind === 'slab' ? 'slab' : 'columns', radius: layout.radius, columns: layout.columns, segments: layout.columns * layout.segmentsPerSpan, spanAngle: (2 * Math.PI) / layout.columns },
     loads: {
       cases: loads.cases.map((loadCase) => ({ name: loadCase.name, description: loadCase.description, kind: loadCase.kind, verticalLineLoad: loadCase.verticalLineLoad, radialLineLoad: loadCase.radialLineLoad, verticalResultant: loadCase.verticalResultant })),

@@ -313,12 +313,14 @@ function ringChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, loa
   const factors = loads.combinations.find((combination) => combination.name === item.analysis.combination)?.factors ?? {};
   const pull = radialPull(loads, factors, item.model);
   const station = stationAtNode(item.model, item.analysis, pull.node);
+  const circularBin = spec.bin;
+  if (circularBin.shape !== 'circular') return; // the ring checks belong to a circular bin
   keepWorst(worst, checkRingInPlaneBuckling({ radialLineLoad: pull.q, radius: layout.radius, secondMomentOfArea: section.properties.secondMomentOfAreaZ }, grade), item.analysis.combination, item.scenario, station);
   const junction = {
-    radius: spec.bin.diameter / 2 + spec.bin.wallThickness / 2,
-    cylinderThickness: spec.bin.wallThickness,
-    hopperThickness: spec.bin.hopper.thickness,
-    hopperHalfAngle: spec.bin.hopper.apexHalfAngle,
+    radius: circularBin.diameter / 2 + circularBin.wallThickness / 2,
+    cylinderThickness: circularBin.wallThickness,
+    hopperThickness: circularBin.hopper.thickness,
+    hopperHalfAngle: circularBin.hopper.apexHalfAngle,
     ringArea: section.properties.area,
     ringThickness: Math.max(section.dimensions.flangeThickness, section.dimensions.webThickness),
   };

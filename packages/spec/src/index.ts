@@ -1,6 +1,6 @@
 export { SpecError, type SpecErrorCode, type SpecIssue } from './errors.js';
 export { binSpecInput, steelGrades, sectionFamilies, wallSurfaceCategories, supportScenarios, type BinSpecInput, type BinSpecParsed } from './schema.js';
-export { normaliseSpec, STEEL_DENSITY, MAX_GIRDER_SEGMENTS, type BinSpec } from './spec.js';
+export { normaliseSpec, STEEL_DENSITY, MAX_GIRDER_SEGMENTS, type BinSpec, type CircularBinSpec, type RectangularBinSpec } from './spec.js';
 export { readSpecFile, readDocumentFile, readGirderModelFile, parseSpecText, specFormatOf, MAX_SPEC_BYTES, type SpecFormat } from './read.js';
 export { storedSolidTable, resolveStoredSolid, type StoredSolid, type StoredSolidRow, type WallSurfaceCategory, type SolidOverrides } from './solids.js';
 export { mmToM, degToRad, knPerM3ToNPerM3 } from './units.js';

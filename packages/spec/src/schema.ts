@@ -69,8 +69,10 @@ export const binSpecInput = z.strictObject(
     ),
     bin: z.strictObject(
       {
-        shape: choice(['circular']).default('circular'),
-        diameter: quantity({ min: 1, max: 60, unit: 'm' }),
+        shape: choice(['circular', 'rectangular']).default('circular'),
+        diameter: quantity({ min: 1, max: 60, unit: 'm' }).optional(),
+        lengthX: quantity({ min: 1, max: 60, unit: 'm' }).optional(),
+        lengthY: quantity({ min: 1, max: 60, unit: 'm' }).optional(),
         cylinderHeight: quantity({ min: 0.5, max: 100, unit: 'm' }),
         fillHeight: quantity({ min: 0.1, max: 100, unit: 'm' }).optional(),
         topSurface: choice(['level', 'pile']).default('level'),
@@ -81,11 +83,15 @@ export const binSpecInput = z.strictObject(
         wallThickness: quantity({ min: 2, max: 60, unit: 'mm' }),
         hopper: z.strictObject(
           {
-            apexHalfAngle: quantity({ min: 5, max: 60, unit: 'degrees' }),
-            outletDiameter: quantity({ min: 0.05, max: 20, unit: 'm' }),
+            kind: choice(['cone', 'pyramid', 'wedge']).optional(),
+            apexHalfAngle: quantity({ min: 5, max: 60, unit: 'degrees' }).optional(),
+            outletDiameter: quantity({ min: 0.05, max: 20, unit: 'm' }).optional(),
+            height: quantity({ min: 0.1, max: 60, unit: 'm' }).optional(),
+            outletLengthX: quantity({ min: 0.05, max: 60, unit: 'm' }).optional(),
+            outletLengthY: quantity({ min: 0.05, max: 60, unit: 'm' }).optional(),
             thickness: quantity({ min: 2, max: 60, unit: 'mm' }),
           },
-          { error: 'must be a table with apexHalfAngle, outletDiameter and thickness' },
+          { error: 'must be a table with apexHalfAngle, outletDiameter and thickness (circular) or height, outletLengthX, outletLengthY and thickness (rectangular)' },
         ),
       },
       { error: 'must be a table describing the bin' },

@@ -27,6 +27,7 @@ function withBin(patch: Record<string, unknown>) {
 describe('normaliseSpec', () => {
   it('converts input units to SI and fills defaults', () => {
     const spec = normaliseSpec(minimal);
+    if (spec.bin.shape !== 'circular') throw new Error('a circular bin was expected');
     expect(spec.bin.wallThickness).toBeCloseTo(0.006, 12);
     expect(spec.bin.hopper.apexHalfAngle).toBeCloseTo(Math.PI / 6, 12);
     expect(spec.bin.fillHeight).toBe(12);
@@ -36,8 +37,22 @@ describe('normaliseSpec', () => {
     expect(spec.actions).toEqual({ permanentFactor: 1.35, solidFactor: 1.5, variableFactor: 1.5, combinationMethod: '6.10' });
     expect(spec.equipment).toEqual([]);
     expect(spec.wind).toBeUndefined();
-    expect(spec.bin.patchLoadMethod).toBe('patch');
+    expect(spec.bin.shape === 'circular' && spec.bin.patchLoadMethod).toBe('patch');
     expect(spec.support.capBolts).toBeUndefined();
+  });
+
+  it('takes a rectangular bin with a pyramid or a wedge hopper, and says which inputs each shape needs', () => {
+    const rectangular = { ...minimal, bin: { shape: 'rectangular', lengthX: 6, lengthY: 4, cylinderHeight: 10, wallThickness: 6, hopper: { kind: 'pyramid', height: 3, outletLengthX: 0.6, outletLengthY: 0.4, thickness: 8 } } };
+    const spec = normaliseSpec(rectangular);
+    expect(spec.bin).toMatchObject({ shape: 'rectangular', lengthX: 6, lengthY: 4, fillHeight: 10, hopper: { kind: 'pyramid', height: 3, outletLengthX: 0.6, outletLengthY: 0.4 } });
+    expect(spec.bin.wallThickness).toBeCloseTo(0.006, 12);
+    // a wedge's slot runs along X over the whole box
+    const wedge = normaliseSpec({ ...rectangular, bin: { ...rectangular.bin, hopper: { kind: 'wedge', height: 3, outletLengthY: 0.4, thickness: 8 } } });
+    expect(wedge.bin.shape === 'rectangular' && wedge.bin.hopper.outletLengthX).toBe(6);
+    expect(errorOf({ ...rectangular, bin: { ...rectangular.bin, diameter: 6 } }).message).toBe('bin.diameter does not apply to a rectangular bin; remove it');
+    expect(errorOf({ ...rectangular, bin: { ...rectangular.bin, lengthY: undefined } }).message).toBe('bin.lengthY is required for a rectangular bin (a number between 1 and 60 m)');
+    expect(errorOf({ ...minimal, bin: { ...minimal.bin, diameter: undefined } }).message).toBe('bin.diameter is required for a circular bin (a number between 1 and 60 m)');
+    expect(errorOf({ ...rectangular, bin: { ...rectangular.bin, hopper: { ...rectangular.bin.hopper, outletLengthY: 3.8 } } }).message).toBe('bin.hopper.outletLengthY must be less than 0.9 times bin.lengthY (3.600 m); got 3.8');
   });
 
   it('converts the cap bolts and the welded-box limits to SI, and makes the bolted scenario credible', () => {

@@ -6,29 +6,48 @@ import { degToRad, KN, KPA, knPerM3ToNPerM3, mmToM } from './units.js';
 
 export const STEEL_DENSITY = 7850; // kg/m3, EN 1991-1-1 Table A.4 (steel)
 
+export interface CircularBinSpec {
+  shape: 'circular';
+  /** Internal diameter of the cylinder d_c, m. */
+  diameter: number;
+  /** Height of the vertical wall from the transition to its top, m. */
+  cylinderHeight: number;
+  /** Height of the level solid surface above the transition, m. */
+  fillHeight: number;
+  wallThickness: number;
+  topSurface: 'level' | 'pile';
+  fillingEccentricity: number;
+  outletEccentricity: number;
+  /** Patch loads (EN 1991-4 5.2.1.2, 5.2.2.2) or, in action assessment class 2 only, the substitute uniform increase (5.2.1.4, 5.2.2.4). */
+  patchLoadMethod: 'patch' | 'uniform-increase';
+  /** Direction of the eccentricities from +X, rad. */
+  eccentricityAngle: number;
+  hopper: { apexHalfAngle: number; outletDiameter: number; thickness: number };
+  steelDensity: number;
+}
+
+/** A rectangular bin (box and pyramidal or wedge hopper) in SI base units; X and Y the plan axes. */
+export interface RectangularBinSpec {
+  shape: 'rectangular';
+  /** Internal plan lengths of the box along X and Y, m. */
+  lengthX: number;
+  lengthY: number;
+  /** Height of the vertical walls from the transition to their top, m. */
+  cylinderHeight: number;
+  /** Height of the level solid surface above the transition, m. */
+  fillHeight: number;
+  wallThickness: number;
+  topSurface: 'level' | 'pile';
+  /** 'pyramid': four sloping faces; 'wedge': two faces sloping toward a slot along X, vertical end walls. */
+  hopper: { kind: 'pyramid' | 'wedge'; height: number; outletLengthX: number; outletLengthY: number; thickness: number };
+  steelDensity: number;
+}
+
 /** The validated bin specification in SI base units: what every later stage reads. */
 export interface BinSpec {
   schemaVersion: 1;
   project: { name: string; client: string; site: string; reference: string; designer: string; date: string };
-  bin: {
-    shape: 'circular';
-    /** Internal diameter of the cylinder d_c, m. */
-    diameter: number;
-    /** Height of the vertical wall from the transition to its top, m. */
-    cylinderHeight: number;
-    /** Height of the level solid surface above the transition, m. */
-    fillHeight: number;
-    wallThickness: number;
-    topSurface: 'level' | 'pile';
-    fillingEccentricity: number;
-    outletEccentricity: number;
-    /** Patch loads (EN 1991-4 5.2.1.2, 5.2.2.2) or, in action assessment class 2 only, the substitute uniform increase (5.2.1.4, 5.2.2.4). */
-    patchLoadMethod: 'patch' | 'uniform-increase';
-    /** Direction of the eccentricities from +X, rad. */
-    eccentricityAngle: number;
-    hopper: { apexHalfAngle: number; outletDiameter: number; thickness: number };
-    steelDensity: number;
-  };
+  bin: CircularBinSpec | RectangularBinSpec;
   solid: StoredSolid;
   support: {
     type: 'ring-on-columns' | 'ring-on-slab';
@@ -95,18 +114,10 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
   if (bin.fillHeight !== undefined && bin.fillHeight > bin.cylinderHeight) {
     issues.push({ path: 'bin.fillHeight', message: `bin.fillHeight must be between 0.1 m and bin.cylinderHeight (${bin.cylinderHeight} m); got ${bin.fillHeight}` });
   }
-  if (bin.hopper.outletDiameter >= 0.9 * bin.diameter) {
-    issues.push({ path: 'bin.hopper.outletDiameter', message: `bin.hopper.outletDiameter must be less than 0.9 times bin.diameter (${(0.9 * bin.diameter).toFixed(3)} m); got ${bin.hopper.outletDiameter}` });
-  }
-  const hopperHeight = (bin.diameter - bin.hopper.outletDiameter) / 2 / Math.tan(degToRad(bin.hopper.apexHalfAngle));
-  const totalHeight = bin.cylinderHeight + hopperHeight;
-  // EN 1991-4:2006 1.1.2(3): h_b / d_c < 10 and h_b < 100 m (scope of the standard; from memory).
-  if (totalHeight / bin.diameter >= 10) {
-    issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m, h_b/d_c = ${(totalHeight / bin.diameter).toFixed(2)}; EN 1991-4 covers h_b/d_c below 10` });
-  }
-  if (totalHeight >= 100) {
-    issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m; EN 1991-4 covers h_b below 100 m` });
-  }
+  const shapeIssues = binShapeIssues(bin);
+  if (shapeIssues.length > 0) return [...issues, ...shapeIssues];
+  if (bin.shape === 'rectangular') issues.push(...rectangularIssues(parsed));
+  else issues.push(...circularIssues(parsed));
   const support = parsed.support;
   if (support.type === 'ring-on-columns' && support.columns === undefined) {
     issues.push({ path: 'support.columns', message: 'support.columns is required for a ring on columns (a whole number of columns between 3 and 36)' });
@@ -157,12 +168,115 @@ function crossFieldIssues(parsed: BinSpecParsed): SpecIssue[] {
       issues.push({ path: 'support.anchorCapacity', message: "support.anchorCapacity must be greater than 0 kN/m for the scenario 'slab-anchored'" });
     }
   }
-  const wallCentreDiameter = bin.diameter + bin.wallThickness / 1000;
+  return issues;
+}
+
+/** The inputs each shape needs and the ones it does not take (the schema leaves them optional). */
+function binShapeIssues(bin: BinSpecParsed['bin']): SpecIssue[] {
+  const issues: SpecIssue[] = [];
+  const circular = bin.shape === 'circular';
+  const needed: Array<[string, unknown, string]> = circular
+    ? [['bin.diameter', bin.diameter, 'a number between 1 and 60 m'], ['bin.hopper.apexHalfAngle', bin.hopper.apexHalfAngle, 'a number between 5 and 60 degrees'], ['bin.hopper.outletDiameter', bin.hopper.outletDiameter, 'a number between 0.05 and 20 m']]
+    : [['bin.lengthX', bin.lengthX, 'a number between 1 and 60 m'], ['bin.lengthY', bin.lengthY, 'a number between 1 and 60 m'], ['bin.hopper.height', bin.hopper.height, 'a number between 0.1 and 60 m'], ['bin.hopper.outletLengthY', bin.hopper.outletLengthY, 'a number between 0.05 and 60 m']];
+  if (!circular && bin.hopper.kind !== 'wedge') needed.push(['bin.hopper.outletLengthX', bin.hopper.outletLengthX, 'a number between 0.05 and 60 m']);
+  for (const [path, value, what] of needed) {
+    if (value === undefined) issues.push({ path, message: `${path} is required for a ${bin.shape} bin (${what})` });
+  }
+  const foreign: Array<[string, unknown]> = circular
+    ? [['bin.lengthX', bin.lengthX], ['bin.lengthY', bin.lengthY], ['bin.hopper.height', bin.hopper.height], ['bin.hopper.outletLengthX', bin.hopper.outletLengthX], ['bin.hopper.outletLengthY', bin.hopper.outletLengthY]]
+    : [['bin.diameter', bin.diameter], ['bin.hopper.apexHalfAngle', bin.hopper.apexHalfAngle], ['bin.hopper.outletDiameter', bin.hopper.outletDiameter]];
+  if (!circular && bin.hopper.kind === 'wedge') foreign.push(['bin.hopper.outletLengthX', bin.hopper.outletLengthX]);
+  for (const [path, value] of foreign) {
+    if (value !== undefined) issues.push({ path, message: `${path} does not apply to a ${bin.shape}${bin.hopper.kind === 'wedge' ? ' wedge-hopper' : ''} bin; remove it` });
+  }
+  const kinds = circular ? ['cone'] : ['pyramid', 'wedge'];
+  if (bin.hopper.kind !== undefined && !kinds.includes(bin.hopper.kind)) {
+    issues.push({ path: 'bin.hopper.kind', message: `bin.hopper.kind must be ${kinds.join(' or ')} for a ${bin.shape} bin; got ${bin.hopper.kind}` });
+  }
+  if (!circular && (bin.fillingEccentricity !== 0 || bin.outletEccentricity !== 0)) {
+    issues.push({ path: bin.fillingEccentricity !== 0 ? 'bin.fillingEccentricity' : 'bin.outletEccentricity', message: 'eccentric filling and discharge are not covered for a rectangular bin: give 0 m' });
+  }
+  return issues;
+}
+
+/** Circular bin: outlet within the cylinder, the standard's scope, the girder under the shell. */
+function circularIssues(parsed: BinSpecParsed): SpecIssue[] {
+  const { bin } = parsed;
+  const issues: SpecIssue[] = [];
+  const diameter = bin.diameter as number;
+  const outletDiameter = bin.hopper.outletDiameter as number;
+  const apexHalfAngle = bin.hopper.apexHalfAngle as number;
+  if (outletDiameter >= 0.9 * diameter) {
+    issues.push({ path: 'bin.hopper.outletDiameter', message: `bin.hopper.outletDiameter must be less than 0.9 times bin.diameter (${(0.9 * diameter).toFixed(3)} m); got ${outletDiameter}` });
+  }
+  const hopperHeight = (diameter - outletDiameter) / 2 / Math.tan(degToRad(apexHalfAngle));
+  const totalHeight = bin.cylinderHeight + hopperHeight;
+  // EN 1991-4:2006 1.1.2(3): h_b / d_c < 10 and h_b < 100 m (scope of the standard; from memory).
+  if (totalHeight / diameter >= 10) {
+    issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m, h_b/d_c = ${(totalHeight / diameter).toFixed(2)}; EN 1991-4 covers h_b/d_c below 10` });
+  }
+  if (totalHeight >= 100) {
+    issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m; EN 1991-4 covers h_b below 100 m` });
+  }
+  const wallCentreDiameter = diameter + bin.wallThickness / 1000;
   const girderDiameter = parsed.support.girderDiameter ?? wallCentreDiameter;
   if (Math.abs(girderDiameter - wallCentreDiameter) > 0.5) {
     issues.push({ path: 'support.girderDiameter', message: `support.girderDiameter must be within 0.5 m of the wall centre line (${wallCentreDiameter.toFixed(3)} m) for a girder under the shell; got ${girderDiameter}` });
   }
   return issues;
+}
+
+/** Rectangular bin: the outlet inside the plan, the standard's scope h_b / d_c < 10 with d_c the shorter side. */
+function rectangularIssues(parsed: BinSpecParsed): SpecIssue[] {
+  const { bin } = parsed;
+  const issues: SpecIssue[] = [];
+  const lengthX = bin.lengthX as number;
+  const lengthY = bin.lengthY as number;
+  const outletX = bin.hopper.kind === 'wedge' ? lengthX : (bin.hopper.outletLengthX as number);
+  const outletY = bin.hopper.outletLengthY as number;
+  if (bin.hopper.kind !== 'wedge' && outletX >= 0.9 * lengthX) {
+    issues.push({ path: 'bin.hopper.outletLengthX', message: `bin.hopper.outletLengthX must be less than 0.9 times bin.lengthX (${(0.9 * lengthX).toFixed(3)} m); got ${outletX}` });
+  }
+  if (outletY >= 0.9 * lengthY) {
+    issues.push({ path: 'bin.hopper.outletLengthY', message: `bin.hopper.outletLengthY must be less than 0.9 times bin.lengthY (${(0.9 * lengthY).toFixed(3)} m); got ${outletY}` });
+  }
+  const totalHeight = bin.cylinderHeight + (bin.hopper.height as number);
+  const shorter = Math.min(lengthX, lengthY);
+  // EN 1991-4:2006 1.1.2(3): h_b / d_c < 10 and h_b < 100 m, d_c the shorter side (from memory).
+  if (totalHeight / shorter >= 10) {
+    issues.push({ path: 'bin.cylinderHeight', message: `bin.cylinderHeight gives an overall height h_b = ${totalHeight.toFixed(2)} m, h_b/d_c = ${(totalHeight / shorter).toFixed(2)} with d_c the shorter side; EN 1991-4 covers h_b/d_c below 10` });
+  }
+  if (parsed.support.girderDiameter !== undefined) {
+    issues.push({ path: 'support.girderDiameter', message: 'support.girderDiameter applies to a circular bin; remove it' });
+  }
+  return issues;
+}
+
+/** The bin in SI, by shape (the cross-field checks have made sure each shape has its inputs). */
+function normaliseBin(bin: BinSpecParsed['bin']): CircularBinSpec | RectangularBinSpec {
+  const wallThickness = mmToM(bin.wallThickness);
+  const common = { cylinderHeight: bin.cylinderHeight, fillHeight: bin.fillHeight ?? bin.cylinderHeight, topSurface: bin.topSurface, wallThickness, steelDensity: STEEL_DENSITY };
+  if (bin.shape === 'rectangular') {
+    const lengthX = bin.lengthX as number;
+    const kind = bin.hopper.kind === 'wedge' ? 'wedge' : 'pyramid';
+    return {
+      shape: 'rectangular',
+      lengthX,
+      lengthY: bin.lengthY as number,
+      ...common,
+      hopper: { kind, height: bin.hopper.height as number, outletLengthX: kind === 'wedge' ? lengthX : (bin.hopper.outletLengthX as number), outletLengthY: bin.hopper.outletLengthY as number, thickness: mmToM(bin.hopper.thickness) },
+    };
+  }
+  return {
+    shape: 'circular',
+    diameter: bin.diameter as number,
+    ...common,
+    fillingEccentricity: bin.fillingEccentricity,
+    outletEccentricity: bin.outletEccentricity,
+    patchLoadMethod: bin.patchLoadMethod,
+    eccentricityAngle: degToRad(bin.eccentricityAngle),
+    hopper: { apexHalfAngle: degToRad(bin.hopper.apexHalfAngle as number), outletDiameter: bin.hopper.outletDiameter as number, thickness: mmToM(bin.hopper.thickness) },
+  };
 }
 
 /** Validate a parsed document (from YAML, JSON or a workbook) and convert it to SI: the BinSpec. */
@@ -185,31 +299,14 @@ export function normaliseSpec(document: unknown): BinSpec {
   return {
     schemaVersion: 1,
     project: input.project,
-    bin: {
-      shape: input.bin.shape,
-      diameter: input.bin.diameter,
-      cylinderHeight: input.bin.cylinderHeight,
-      fillHeight: input.bin.fillHeight ?? input.bin.cylinderHeight,
-      topSurface: input.bin.topSurface,
-      fillingEccentricity: input.bin.fillingEccentricity,
-      outletEccentricity: input.bin.outletEccentricity,
-      patchLoadMethod: input.bin.patchLoadMethod,
-      eccentricityAngle: degToRad(input.bin.eccentricityAngle),
-      wallThickness,
-      hopper: {
-        apexHalfAngle: degToRad(input.bin.hopper.apexHalfAngle),
-        outletDiameter: input.bin.hopper.outletDiameter,
-        thickness: mmToM(input.bin.hopper.thickness),
-      },
-      steelDensity: STEEL_DENSITY,
-    },
+    bin: normaliseBin(input.bin),
     solid,
     support: {
       type: input.support.type,
       columns: input.support.type === 'ring-on-slab' ? 1 : (input.support.columns ?? 0),
       bearingModulus: input.support.bearingModulus * 1e6,
       anchorCapacity: input.support.anchorCapacity * KN,
-      girderDiameter: input.support.girderDiameter ?? input.bin.diameter + wallThickness,
+      girderDiameter: input.support.girderDiameter ?? (input.bin.diameter ?? 0) + wallThickness,
       segmentsPerSpan: input.support.type === 'ring-on-slab' ? input.support.segments : input.support.segmentsPerSpan,
       grade: input.support.grade,
       sectionFamilies: [...new Set(input.support.sectionFamilies)],

@@ -121,7 +121,9 @@ describe('spec-sheet fields', () => {
 
   it('take ranges, choices and defaults from the schema', () => {
     const byPath = new Map(specSheetFields().map((field) => [field.path, field]));
-    expect(byPath.get('bin.hopper.apexHalfAngle')).toMatchObject({ kind: 'number', min: 5, max: 60, unit: 'degrees', required: true });
+    expect(byPath.get('bin.hopper.thickness')).toMatchObject({ kind: 'number', min: 2, max: 60, unit: 'mm', required: true });
+    // required for one shape only: optional in the schema, and the sheet says for which shape
+    expect(byPath.get('bin.hopper.apexHalfAngle')).toMatchObject({ kind: 'number', min: 5, max: 60, unit: 'degrees', required: false, defaultText: 'required for a circular bin' });
     expect(byPath.get('support.columns')).toMatchObject({ kind: 'whole number', min: 3, max: 36 });
     expect(byPath.get('support.grade')).toMatchObject({ kind: 'choice', choices: ['S235', 'S275', 'S355', 'S460'], defaultText: 'S355', required: false });
     expect(byPath.get('support.credibleScenarios')).toMatchObject({ kind: 'list of choices', defaultText: 'the contact scenario of the support type' });
@@ -148,7 +150,8 @@ describe('spec-sheet template', () => {
     const apex = sheet.getRow(rowsByPath(sheet).get('bin.hopper.apexHalfAngle') ?? 0);
     expect(apex.getCell(3).value).toBe('degrees');
     expect(apex.getCell(4).value).toBe('5 to 60 degrees');
-    expect(apex.getCell(5).value).toBe('required');
+    expect(apex.getCell(5).value).toBe('required for a circular bin');
+    expect(sheet.getRow(rowsByPath(sheet).get('bin.cylinderHeight') ?? 0).getCell(5).value).toBe('required');
     const readMe = workbook.getWorksheet(README_SHEET);
     const text: string[] = [];
     readMe?.eachRow((row) => text.push(String(row.getCell(1).value)));
