@@ -43,6 +43,20 @@ function choice<const T extends readonly [string, ...string[]]>(values: T) {
   return z.enum(values, { error: `must be one of ${values.join(', ')}` });
 }
 
+/** Ranges of generated welded sections (plate girders, boxes), mm: depths, flange widths up to `maxWidth`, plate lists. */
+function plateLimits(maxWidth: number) {
+  return {
+    minDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
+    maxDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
+    depthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
+    minFlangeWidth: quantity({ min: 100, max: maxWidth, unit: 'mm' }),
+    maxFlangeWidth: quantity({ min: 100, max: maxWidth, unit: 'mm' }),
+    flangeWidthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
+    flangeThicknesses: z.array(quantity({ min: 5, max: 80, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
+    webThicknesses: z.array(quantity({ min: 4, max: 50, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
+  };
+}
+
 export const steelGrades = ['S235', 'S275', 'S355', 'S460'] as const;
 export const sectionFamilies = ['IPE', 'HEA', 'HEB', 'HEM'] as const;
 /** Bolt sizes with a tabulated tensile stress area (ISO 898-1), mm. */
@@ -124,34 +138,10 @@ export const binSpecInput = z.strictObject(
         bearingStiffenerWidth: quantity({ min: 30, max: 500, unit: 'mm' }).optional(),
         bearingStiffenerChamfer: quantity({ min: 0, max: 50, unit: 'mm' }).default(15),
         girderRestraint: choice(['shell', 'columns']).default('shell'),
-        weldedGirders: z
-          .strictObject(
-            {
-              minDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
-              maxDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
-              depthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
-              minFlangeWidth: quantity({ min: 100, max: 1000, unit: 'mm' }),
-              maxFlangeWidth: quantity({ min: 100, max: 1000, unit: 'mm' }),
-              flangeWidthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
-              flangeThicknesses: z.array(quantity({ min: 5, max: 80, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
-              webThicknesses: z.array(quantity({ min: 4, max: 50, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
-            },
-            { error: 'must be a table of welded-girder limits (minDepth, maxDepth, minFlangeWidth, maxFlangeWidth in mm)' },
-          )
-          .optional(),
+        weldedGirders: z.strictObject(plateLimits(1000), { error: 'must be a table of welded-girder limits (minDepth, maxDepth, minFlangeWidth, maxFlangeWidth in mm)' }).optional(),
         weldedBoxes: z
           .strictObject(
-            {
-              minDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
-              maxDepth: quantity({ min: 150, max: 3000, unit: 'mm' }),
-              depthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
-              minFlangeWidth: quantity({ min: 100, max: 1500, unit: 'mm' }),
-              maxFlangeWidth: quantity({ min: 100, max: 1500, unit: 'mm' }),
-              flangeWidthStep: quantity({ min: 10, max: 500, unit: 'mm' }).default(50),
-              flangeThicknesses: z.array(quantity({ min: 5, max: 80, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
-              webThicknesses: z.array(quantity({ min: 4, max: 50, unit: 'mm' }), { error: 'must be a list of plate thicknesses in mm' }).min(1).max(20).optional(),
-              flangeOutstand: quantity({ min: 0, max: 200, unit: 'mm' }).default(20),
-            },
+            { ...plateLimits(1500), flangeOutstand: quantity({ min: 0, max: 200, unit: 'mm' }).default(20) },
             { error: 'must be a table of welded-box limits (minDepth, maxDepth, minFlangeWidth, maxFlangeWidth in mm)' },
           )
           .optional(),
