@@ -56,8 +56,14 @@ export async function runLoads(args: string[], streams: CliStreams): Promise<num
       return 0;
     }
     streams.stdout.write(`solid ${fixed(report.totals.solidWeight / 1e3, 1)} kN, structure ${fixed(report.totals.structureWeight / 1e3, 1)} kN\n`);
-    for (const loadCase of report.cases) {
-      streams.stdout.write(`${loadCase.name.padEnd(10)} vertical ${fixed(loadCase.verticalLineLoad / 1e3, 2).padStart(9)} kN/m  radial ${fixed(loadCase.radialLineLoad / 1e3, 2).padStart(8)} kN/m  ${loadCase.description}\n`);
+    if (report.shape === 'rectangular') {
+      for (const loadCase of report.cases) {
+        streams.stdout.write(`${loadCase.name.padEnd(10)} vertical ${fixed(loadCase.verticalResultant / 1e3, 1).padStart(9)} kN on the support line  ${loadCase.description}\n`);
+      }
+    } else {
+      for (const loadCase of report.cases) {
+        streams.stdout.write(`${loadCase.name.padEnd(10)} vertical ${fixed(loadCase.verticalLineLoad / 1e3, 2).padStart(9)} kN/m  radial ${fixed(loadCase.radialLineLoad / 1e3, 2).padStart(8)} kN/m  ${loadCase.description}\n`);
+      }
     }
     for (const combination of report.combinations) streams.stdout.write(`${combination.name.padEnd(8)} ${combination.expression}  (${combination.clause})\n`);
     for (const note of report.notes) streams.stdout.write(`note: ${note}\n`);

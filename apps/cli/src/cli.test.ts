@@ -65,4 +65,19 @@ describe('listing commands', () => {
     expect(gravity / (report.totals.solidWeight + report.totals.structureWeight)).toBeCloseTo(1, 9);
     expect(report.profiles.length).toBeGreaterThan(0);
   });
+
+  it('loads --json of a rectangular bin: the edge line loads of G + Q_s,f integrate to the solid and the plates (statics); design refuses the shape', async () => {
+    const { streams, out } = capture();
+    expect(await runCli(['loads', '../../demo-data/kestrel-sand-bunker.yaml', '--json'], streams)).toBe(EXIT_OK);
+    const report = JSON.parse(out.join('')) as { shape: string; edges: Array<{ case: string; s: number[]; vertical: number[] }>; totals: { solidWeight: number; structureWeight: number }; profiles: Array<{ part: string }> };
+    expect(report.shape).toBe('rectangular');
+    // trapezoidal rule along each edge's stations
+    const integral = (s: number[], q: number[]) => s.slice(1).reduce((sum, _, i) => sum + (((q[i + 1] ?? 0) + (q[i] ?? 0)) / 2) * ((s[i + 1] ?? 0) - (s[i] ?? 0)), 0);
+    const gravity = report.edges.filter((edge) => edge.case === 'G' || edge.case === 'Q_s,f').reduce((sum, edge) => sum + integral(edge.s, edge.vertical), 0);
+    expect(Math.abs(gravity / (report.totals.solidWeight + report.totals.structureWeight) - 1)).toBeLessThan(1e-3);
+    expect(new Set(report.profiles.map((profile) => profile.part))).toEqual(new Set(['wall', 'hopper']));
+    const refused = capture();
+    expect(await runCli(['design', '../../demo-data/kestrel-sand-bunker.yaml', '--out', 'out/never'], refused.streams)).toBe(EXIT_BAD_INPUT);
+    expect(refused.err.join('')).toContain('(input: bin.shape)');
+  });
 });

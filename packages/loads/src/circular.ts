@@ -4,13 +4,14 @@ import { combineActions, type PartialFactors, type VariableGroup } from './combi
 import { LoadsError } from './errors.js';
 import { circularBinGeometry, type CircularBin } from './geometry.js';
 import { globalBending } from './harmonics.js';
+import { FLOW_CHANNEL_RADIUS_RATIOS, fitCosineSeries, flowChannelEtaRange, flowChannelGeometry, flowChannelPressures, flowChannelZones } from './flow-channel.js';
 import { hopperPressures, hopperWallVerticalResultant, type HopperPressureSet } from './hopper.js';
 import { janssenProfile, type JanssenState } from './janssen.js';
 import { characteristicSet, type CharacteristicSet, type SolidProperties } from './properties.js';
 import { slendernessClass, type SlendernessClass } from './slenderness.js';
 import { squatProfile } from './squat.js';
 import { topSurface } from './surface.js';
-import type { DerivationStep, LoadSet, PressureProfile, SupportLineCase } from './types.js';
+import type { DerivationStep, Harmonic, LoadSet, PressureProfile, SupportLineCase } from './types.js';
 import { requireAngle, requireRange } from './validate.js';
 import { dischargeFactors, patchFactors, patchHeight, thinWalledPatchForce, uniformIncreaseFactor, uniformIncreaseZeta } from './wall.js';
 
@@ -188,6 +189,164 @@ function wallProfile(slenderness: SlendernessClass, set: CharacteristicSet, hydr
     : squatProfile({ unitWeight: set.unitWeight, lateralPressureRatio: set.lateralPressureRatio, wallFrictionCoefficient: set.wallFrictionCoefficient, hydraulicRadius, angleOfRepose, h0 });
 }
 
+/** Name of the flow-channel case for the channel radius ratio G = r_c / r: Q_s,c25, Q_s,c40, Q_s,c60. */
+export function flowChannelCaseName(radiusRatio: number): string {
+  return `Q_s,c${Math.round(100 * radiusRatio)}`;
+}
+
+interface FlowChannelContext {
+  /** Maximum-wall-friction properties (Table 3.1: K upper, mu upper, phi_i lower) and their Janssen profile. */
+  set: CharacteristicSet;
+  profile: WallProfile;
+  radius: number;
+  fillHeight: number;
+  solidWeight: number;
+  solidWeightCylinder: number;
+  lineRadius: number;
+  tanB: number;
+  direction: number;
+  pileBending: ReturnType<typeof globalBending> | undefined;
+  solidName: string;
+  points: number;
+}
+
+/**
+ * The flow-channel cases of large-eccentricity discharge (EN 1991-4 5.2.4.3; see flow-channel.ts for
+ * the expressions and which of them are from memory) on the support line.
+ *
+ * The wall friction resultant at the transition n_z(theta) = integral of p_w over the wall height is
+ * n_z,ce in the channel zone, n_z,ae = 2 n_z,f - n_z,ce in the adjacent zones and n_z,f elsewhere;
+ * it reaches the support line (radius r_s) as n_z r / r_s. Its total is exactly pi d_c n_z,f (the
+ * adjacent zones take what the channel zone sheds), so the hopper carries W_s - pi d_c n_z,f, spread
+ * evenly round the transition: no hopper pressure model for eccentric flow is available to us, and
+ * the even spread keeps the hopper's share out of the moment (the variation the girder sees comes
+ * from the wall). The vertical total is the weight of the solid: the friction moves load between wall
+ * and hopper and adds none. The circumferential variation is a cosine series about the outlet
+ * direction theta_e, long enough that every zone's resultant and first moment are within 2 %.
+ */
+function flowChannelLoadCases(ctx: FlowChannelContext): { cases: SupportLineCase[]; derivation: DerivationStep[]; notes: string[]; profiles: PressureProfile[] } {
+  const { set, profile, radius: r, fillHeight: hc, solidWeight, solidWeightCylinder, lineRadius: rs, tanB, direction, pileBending } = ctx;
+  const clause = 'EN 1991-4 5.2.4.3.1 (from memory)';
+  const pressureClause = 'EN 1991-4 5.2.4.3.2 (from memory)';
+  const mu = set.wallFrictionCoefficient;
+  const K = set.lateralPressureRatio;
+  const phi = set.internalFrictionAngle;
+  const eta = mu / Math.tan(phi);
+  const linePerimeter = 2 * Math.PI * rs;
+  const atF = profile.at(hc);
+  const nzf = atF.nzSk;
+  const cases: SupportLineCase[] = [];
+  const profiles: PressureProfile[] = [];
+  const derivation: DerivationStep[] = [
+    { symbol: 'eta', description: 'ratio of wall friction to internal friction, maximum-wall-friction properties (mu upper, phi_i lower)', expression: 'mu / tan(phi_i)', value: eta, unit: '-', clause },
+    { symbol: 'n_z,f(h_c) (flow channel)', description: 'wall friction resultant per unit perimeter at the transition in the static solid (filling, maximum-wall-friction properties)', expression: 'mu p_ho (h_c - z_o (1 - exp(-h_c/z_o)))', value: nzf, unit: 'N/m', clause: 'EN 1991-4 5.2.1.1 (5.7)' },
+    { symbol: 'p_hf(h_c) (flow channel)', description: 'filling horizontal pressure at the transition (maximum-wall-friction properties)', expression: 'p_ho (1 - exp(-h_c/z_o))', value: atF.ph, unit: 'Pa', clause: 'EN 1991-4 5.2.1.1 (5.1)' },
+  ];
+  const pileHarmonic = pileBending?.verticalHarmonics?.[0];
+  for (const G of FLOW_CHANNEL_RADIUS_RATIOS) {
+    const name = flowChannelCaseName(G);
+    const geo = flowChannelGeometry(r, G, eta);
+    if (!geo) {
+      const range = flowChannelEtaRange(G);
+      throw new LoadsError('OUT_OF_SCOPE', 'solid.wallFrictionCoefficient', `solid.wallFrictionCoefficient (upper value) over tan(solid.internalFrictionAngle) (lower value) must be between ${range.lower.toFixed(3)} and ${range.upper.toFixed(3)} (dimensionless) for the flow channel r_c = ${G} r to cut the wall (EN 1991-4 5.2.4.3.1; e_c expression from memory); got eta = ${eta.toFixed(3)}`);
+    }
+    const pressures = flowChannelPressures(geo, { unitWeight: set.unitWeight, lateralPressureRatio: K, wallFrictionCoefficient: mu, internalFrictionAngle: phi });
+    for (let i = 0; i <= 200; i++) {
+      const z = (hc * i) / 200;
+      if (2 * profile.at(z).ph - pressures.at(z).ph < 0) {
+        throw new LoadsError('OUT_OF_SCOPE', 'solid.internalFrictionAngle', `the adjacent-zone pressure 2 p_hf - p_hce of the flow channel r_c = ${G} r would be negative at z = ${z.toFixed(2)} m (z_oc = ${pressures.z0c.toFixed(3)} m against z_o = ${profile.z0.toFixed(3)} m): the flow-channel model does not cover this solid`);
+      }
+    }
+    const atC = pressures.at(hc);
+    const nzce = atC.nz;
+    const nzae = 2 * nzf - nzce;
+    // Wall friction per unit perimeter, carried to the support line: n_z r / r_s.
+    const toLine = r / rs;
+    const zones = flowChannelZones(geo.wallContactHalfAngle, nzce * toLine, nzae * toLine, nzf * toLine);
+    let wallForce = 2 * rs * zones.reduce((sum, z) => sum + z.value * (z.to - z.from), 0);
+    let scale = 1;
+    if (wallForce > solidWeightCylinder) {
+      // Statics: the wall cannot carry more than the solid above the transition.
+      scale = solidWeightCylinder / wallForce;
+      wallForce = solidWeightCylinder;
+    }
+    const scaled = zones.map((z) => ({ ...z, value: z.value * scale }));
+    const fit = fitCosineSeries(scaled, 0.02);
+    const onHopper = solidWeight - wallForce;
+    const harmonics: Harmonic[] = [];
+    for (let k = 1; k <= fit.order; k++) {
+      const ak = fit.coefficients[k] ?? 0;
+      harmonics.push({ order: k, cos: ak * Math.cos(k * direction), sin: ak * Math.sin(k * direction) });
+    }
+    const first = harmonics[0];
+    if (first && pileHarmonic) {
+      first.cos += pileHarmonic.cos;
+      first.sin += pileHarmonic.sin;
+    }
+    const a1 = fit.coefficients[1] ?? 0;
+    const channelMoment = a1 * Math.PI * rs * rs;
+    const overturningMoment = first ? { x: Math.PI * rs * rs * first.sin, y: -Math.PI * rs * rs * first.cos } : undefined;
+    cases.push({
+      name,
+      description: `stored solid (${ctx.solidName}) at large-eccentricity discharge, flow channel r_c = ${G} r against the wall toward ${Math.round((direction * 180) / Math.PI)} degrees: wall friction lower in the channel zone, higher in the adjacent zones, filling elsewhere (maximum-wall-friction properties); the hopper carries the rest of the weight`,
+      kind: 'variable',
+      action: 'solid',
+      lineRadius: rs,
+      verticalLineLoad: solidWeight / linePerimeter,
+      radialLineLoad: (onHopper * tanB) / linePerimeter,
+      verticalResultant: solidWeight,
+      verticalHarmonics: harmonics,
+      ...(overturningMoment ? { overturningMoment } : {}),
+      distribution: `EN 1991-4 5.2.4.3 flow channel (from memory): wall friction n_z(theta) piecewise constant about theta_e (channel |theta - theta_e| < theta_c, adjacent zones to 2 theta_c, filling elsewhere) as a cosine series of ${fit.order} harmonics (each zone's resultant within ${(100 * fit.resultantError).toFixed(2)} %, first moment within ${(100 * fit.momentError).toFixed(2)} %); hopper share uniform${pileHarmonic ? '; plus the eccentric top pile (M / (pi r^2)) cos(theta - theta_e)' : ''}`,
+    });
+    const thetaDeg = (geo.wallContactHalfAngle * 180) / Math.PI;
+    derivation.push(
+      { symbol: `r_c (${name})`, description: `flow channel radius, G = ${G}`, expression: 'G r', value: geo.channelRadius, unit: 'm', clause },
+      { symbol: `e_c (${name})`, description: 'distance of the flow channel centre from the bin axis, toward the outlet', expression: 'r (eta (1 - G) + (1 - sqrt(G)))', value: geo.eccentricity, unit: 'm', clause },
+      { symbol: `theta_c (${name})`, description: `half-angle of the channel's contact with the wall (${thetaDeg.toFixed(2)} degrees)`, expression: 'acos((r^2 + e_c^2 - r_c^2) / (2 r e_c))', value: geo.wallContactHalfAngle, unit: 'rad', clause: `${clause}; geometry` },
+      { symbol: `psi (${name})`, description: 'angle at the channel centre between the outward direction and the wall intersection', expression: 'acos((r^2 - e_c^2 - r_c^2) / (2 e_c r_c))', value: geo.psi, unit: 'rad', clause: `${clause}; geometry` },
+      { symbol: `U_wc (${name})`, description: 'arc of contact between the flowing solid and the wall', expression: '2 theta_c r', value: geo.wallContactArc, unit: 'm', clause: `${clause}; geometry` },
+      { symbol: `U_sc (${name})`, description: 'arc of contact between the flowing and the static solid (channel circle inside the bin)', expression: '2 (pi - psi) r_c', value: geo.interfaceArc, unit: 'm', clause: `${clause}; geometry` },
+      { symbol: `A_c (${name})`, description: 'plan area of the flow channel', expression: '(pi - psi) r_c^2 + theta_c r^2 - r r_c sin(psi - theta_c)', value: geo.area, unit: 'm2', clause: `${clause}; geometry` },
+      { symbol: `z_oc (${name})`, description: 'characteristic depth of the flow channel', expression: '(1/K) A_c / (U_wc mu + U_sc tan(phi_i))', value: pressures.z0c, unit: 'm', clause: pressureClause },
+      { symbol: `p_hco (${name})`, description: 'asymptotic horizontal pressure in the flow channel', expression: 'gamma K z_oc', value: pressures.ph0c, unit: 'Pa', clause: pressureClause },
+      { symbol: `p_hce(h_c) (${name})`, description: 'horizontal pressure on the wall in the channel zone at the transition', expression: 'p_hco (1 - exp(-h_c/z_oc))', value: atC.ph, unit: 'Pa', clause: pressureClause },
+      { symbol: `p_hae(h_c) (${name})`, description: 'horizontal pressure on the wall in the adjacent zones at the transition', expression: '2 p_hf - p_hce', value: 2 * atF.ph - atC.ph, unit: 'Pa', clause: pressureClause },
+      { symbol: `n_z,ce(h_c) (${name})`, description: 'wall friction resultant per unit perimeter in the channel zone (integral of p_wce = mu p_hce)', expression: 'mu p_hco (h_c - z_oc (1 - exp(-h_c/z_oc)))', value: nzce, unit: 'N/m', clause: pressureClause },
+      { symbol: `n_z,ae(h_c) (${name})`, description: 'wall friction resultant per unit perimeter in the adjacent zones (integral of p_wae = mu p_hae)', expression: '2 n_z,f - n_z,ce', value: nzae, unit: 'N/m', clause: pressureClause },
+      { symbol: `F_w,c (${name})`, description: 'solid weight carried by wall friction (the adjacent zones take what the channel zone sheds)', expression: scale === 1 ? 'r (2 theta_c n_z,ce + 2 theta_c n_z,ae + (2 pi - 4 theta_c) n_z,f) = pi d_c n_z,f' : 'gamma V_cyl (capped: at most the weight in the cylinder)', value: wallForce, unit: 'N', clause: 'statics' },
+      { symbol: `F_h,c (${name})`, description: 'solid weight carried by the hopper, spread evenly round the transition', expression: 'W_s - F_w,c', value: onHopper, unit: 'N', clause: 'statics' },
+      { symbol: `n_v(${name})`, description: 'mean vertical line load from the solid (the weight of the solid)', expression: 'W_s / (2 pi r_s)', value: solidWeight / linePerimeter, unit: 'N/m', clause: 'statics' },
+      { symbol: `n_r(${name})`, description: 'inward radial pull of the hopper', expression: 'F_h,c tan(beta) / (2 pi r_s)', value: (onHopper * tanB) / linePerimeter, unit: 'N/m', clause: 'statics of the hopper meridian' },
+      { symbol: `N_h (${name})`, description: 'number of cosine harmonics of the wall friction about theta_e (each zone within 2 % in resultant and first moment)', expression: 'least N with |error| <= 2 %', value: fit.order, unit: '-', clause: 'Fourier series of a piecewise-constant function' },
+      { symbol: `M_c (${name})`, description: 'overturning moment of the wall-friction variation about the support level (negative: it unloads the outlet side)', expression: 'pi r_s^2 a_1, a_1 = (2/pi) integral_0^pi q(phi) cos(phi) dphi', value: channelMoment, unit: 'N m', clause: 'statics' },
+    );
+    const channelProfile: PressureProfile = { case: `${name} channel zone`, part: 'wall', z: [], ph: [], pw: [], pv: [] };
+    const adjacentProfile: PressureProfile = { case: `${name} adjacent zones`, part: 'wall', z: [], ph: [], pw: [], pv: [] };
+    for (let i = 0; i < ctx.points; i++) {
+      const z = (hc * i) / (ctx.points - 1);
+      const c = pressures.at(z);
+      const f = profile.at(z);
+      const pha = 2 * f.ph - c.ph;
+      channelProfile.z.push(z);
+      channelProfile.ph.push(c.ph);
+      channelProfile.pw.push(c.pw);
+      // Mean vertical stress of the channel's Janssen state, p_h / K.
+      channelProfile.pv.push(c.ph / K);
+      adjacentProfile.z.push(z);
+      adjacentProfile.ph.push(pha);
+      adjacentProfile.pw.push(mu * pha);
+      // The adjacent zones are static solid: the filling vertical stress.
+      adjacentProfile.pv.push(f.pv);
+    }
+    profiles.push(channelProfile, adjacentProfile);
+  }
+  const notes = [
+    'Large-eccentricity discharge (e_o > 0.25 d_c, AAC 3): flow-channel cases Q_s,c25, Q_s,c40 and Q_s,c60 (r_c = 0.25 r, 0.4 r, 0.6 r; EN 1991-4 5.2.4.3) as further alternatives of the solid action, without the patch loads. From memory, not confirmed against the text: the three radii, e_c = r (eta (1 - G) + (1 - sqrt G)) with eta = mu / tan(phi_i), z_oc = (1/K) A_c / (U_wc mu + U_sc tan(phi_i)), p_hce = gamma K z_oc (1 - exp(-z/z_oc)), p_hae = 2 p_hf - p_hce, the adjacent zones of width theta_c each side, and the choice of the maximum-wall-friction properties (K upper, mu upper, phi_i lower) for the whole case. The circle geometry (theta_c, psi, U_wc, U_sc = 2 (pi - psi) r_c, A_c) is plane geometry. The hopper share is spread evenly round the transition (no eccentric hopper pressure model).',
+  ];
+  return { cases, derivation, notes, profiles };
+}
+
 /**
  * The loads that a circular bin puts on its support line (the junction of cylinder, hopper and
  * girder): self weight, stored solid at filling and discharge with its patch loads (EN 1991-4 5, 6),
@@ -204,6 +363,9 @@ function wallProfile(slenderness: SlendernessClass, set: CharacteristicSet, hydr
  * In AAC 2, `bin.patchLoadMethod: 'uniform-increase'` replaces the patch cases by the substitute
  * uniform pressure increase (EN 1991-4 5.2.1.4, 5.2.2.4): two further solid states Q_s,f,u and
  * Q_s,e,u with the wall friction raised by (1 + zeta C_p), still closing on the weight.
+ * Large-eccentricity discharge (e_o > 0.25 d_c) in a slender bin of AAC 3 adds the flow-channel cases
+ * Q_s,c25, Q_s,c40 and Q_s,c60 (EN 1991-4 5.2.4.3, see `flowChannelLoadCases`); squat and
+ * intermediate bins, and bins below AAC 3, are refused for it.
  */
 export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
   validate(input);
@@ -227,8 +389,14 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
   const ef = bin.fillingEccentricity ?? 0;
   const eo = bin.outletEccentricity ?? 0;
   const direction = bin.eccentricityAngle ?? 0;
-  if (eo > 0.25 * dc) {
-    throw new LoadsError('OUT_OF_SCOPE', 'bin.outletEccentricity', `bin.outletEccentricity must be at most 0.25 bin.diameter (${(0.25 * dc).toFixed(3)} m); got ${eo}: large-eccentricity discharge needs the flow-channel model of EN 1991-4 5.2.4, which is not covered`);
+  // Large-eccentricity discharge (e_o > 0.25 d_c): the flow-channel model of EN 1991-4 5.2.4.3
+  // covers slender bins; squat and intermediate bins are refused (5.3.4 not covered).
+  const largeEccentricity = eo > 0.25 * dc;
+  if (largeEccentricity && slenderness !== 'slender') {
+    throw new LoadsError('OUT_OF_SCOPE', 'bin.outletEccentricity', `bin.outletEccentricity must be at most 0.25 bin.diameter (${(0.25 * dc).toFixed(3)} m) for ${slenderness === 'intermediate' ? 'an' : 'a'} ${slenderness} bin (h_c/d_c = ${aspect.toFixed(3)}); got ${eo} m: large-eccentricity discharge is covered by the flow-channel model of EN 1991-4 5.2.4.3 for slender bins (h_c/d_c >= 2) only`);
+  }
+  if (largeEccentricity && eo + bin.hopper.outletDiameter / 2 > dc / 2) {
+    throw new LoadsError('OUT_OF_SCOPE', 'bin.outletEccentricity', `bin.outletEccentricity must be at most (bin.diameter - bin.hopper.outletDiameter) / 2 = ${((dc - bin.hopper.outletDiameter) / 2).toFixed(3)} m so that the outlet lies inside the bin; got ${eo} m`);
   }
 
   // Top surface and equivalent surface (EN 1991-4 1.5, 5.3.1.1).
@@ -253,6 +421,9 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
       throw new LoadsError('BAD_INPUT', 'bin.actionAssessmentClass', `bin.actionAssessmentClass must be at least ${classified.aac} (EN 1991-4 Table 2.1: ${classified.reason}); got ${bin.actionAssessmentClass}`);
     }
     aac = bin.actionAssessmentClass;
+  }
+  if (largeEccentricity && aac !== 3) {
+    throw new LoadsError('OUT_OF_SCOPE', 'bin.outletEccentricity', `bin.outletEccentricity must be at most 0.25 bin.diameter (${(0.25 * dc).toFixed(3)} m); got ${eo}: large-eccentricity discharge is covered by the flow-channel model of EN 1991-4 5.2.4.3, the action assessment class 3 procedure, and the bin is in class ${aac}: set bin.actionAssessmentClass to 3 to apply it`);
   }
   const patchLoadMethod = bin.patchLoadMethod ?? 'patch';
   if (patchLoadMethod === 'uniform-increase' && aac !== 2) {
@@ -471,6 +642,14 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
     patchCase(DISCHARGE_PATCH_CASE, patch.Cpe, discharge.Ch, 'discharge');
   }
 
+  // Large-eccentricity discharge: one flow-channel case per channel radius (EN 1991-4 5.2.4.3).
+  const flowChannelCases = largeEccentricity ? flowChannelLoadCases({ set: setW, profile: profileW, radius: geometry.radius, fillHeight: hc, solidWeight, solidWeightCylinder, lineRadius, tanB, direction, pileBending, solidName: solid.name, points: Math.max(input.profilePoints ?? 41, 2) }) : undefined;
+  if (flowChannelCases) {
+    cases.push(...flowChannelCases.cases);
+    derivation.push(...flowChannelCases.derivation);
+    notes.push(...flowChannelCases.notes);
+  }
+
   // Roof, equipment, snow.
   const roofDead = input.roof ? input.roof.deadLoad * roofArea : 0;
   const permanentNames = [PERMANENT_CASE];
@@ -485,7 +664,11 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
   const magnifier = cases.some((c) => c.name === HOPPER_MAGNIFIER_CASE) ? [HOPPER_MAGNIFIER_CASE] : [];
   // The uniform-increase cases are full solid states (not increments): further alternatives of Q_s.
   const increasedAlternatives = uniformIncrease.map(({ name }) => ({ label: name === FILLING_UNIFORM_INCREASE_CASE ? 'filling, uniform increase' : 'discharge, uniform increase', cases: [name, ...magnifier] }));
-  groups.push({ action: 'solid', symbol: 'Q_s', alternatives: [{ label: 'filling', cases: solidFilling }, { label: 'discharge', cases: solidDischarge }, ...increasedAlternatives] });
+  // The flow-channel cases are full solid states at discharge: further alternatives of Q_s, each with
+  // the hopper magnifier like the other states, without the patch loads (a load case of its own,
+  // EN 1991-4 5.2.4.1, from memory).
+  const flowChannelAlternatives = (flowChannelCases?.cases ?? []).map((c) => ({ label: `discharge, flow channel ${c.name}`, cases: [c.name, ...magnifier] }));
+  groups.push({ action: 'solid', symbol: 'Q_s', alternatives: [{ label: 'filling', cases: solidFilling }, { label: 'discharge', cases: solidDischarge }, ...increasedAlternatives, ...flowChannelAlternatives] });
   const roofImposed = input.roof?.imposedLoad ?? 0;
   if (roofImposed > 0) {
     cases.push(uniform(ROOF_IMPOSED_CASE, 'roof imposed load on plan (category H)', 'variable', 'roof', roofImposed * roofArea));
@@ -621,7 +804,7 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
     }
     return profile;
   };
-  const profiles = [wall(SOLID_FILLING_CASE, 1, 1), wall(SOLID_DISCHARGE_CASE, discharge.Ch, discharge.Cw), ...uniformIncrease.map(({ name, ch, cw }) => wall(name, ch, cw)), hopperProfile(SOLID_FILLING_CASE, hopper.filling), hopperProfile(SOLID_DISCHARGE_CASE, hopper.discharge)];
+  const profiles = [wall(SOLID_FILLING_CASE, 1, 1), wall(SOLID_DISCHARGE_CASE, discharge.Ch, discharge.Cw), ...uniformIncrease.map(({ name, ch, cw }) => wall(name, ch, cw)), ...(flowChannelCases?.profiles ?? []), hopperProfile(SOLID_FILLING_CASE, hopper.filling), hopperProfile(SOLID_DISCHARGE_CASE, hopper.discharge)];
 
   const combinations = combineActions({ permanent: permanentNames, groups, seismic: seismicNames, closure: [PERMANENT_CASE, SOLID_FILLING_CASE] }, input.partialFactors);
 

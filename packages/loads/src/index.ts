@@ -40,3 +40,11 @@ export { combineActions, DEFAULT_PSI, type CombinationInput, type PartialFactors
 export { globalBending, lineLoadAt } from './harmonics.js';
 export { LoadsError, type LoadsErrorCode } from './errors.js';
 export type { ActionKind, DerivationStep, Harmonic, LoadCombination, LoadSet, PressureProfile, SupportLineCase, Verification } from './types.js';
+export { emptySeismicCaseName } from './rectangular.js';
+export type { EdgeName, HopperFaceClass, PlanEquipmentLoad, PyramidHopper, RectangularHopper, RectangularLoadCase, RectangularPressureProfile, WedgeHopper } from './rectangular-types.js';
+export { faceLoadShape, outletLengths, rectangularHopperGeometry, type HopperFace, type RectangularHopperGeometry } from './rectangular-geometry.js';
+export { hopperWallVerticalForce, rectangularHopperPressures, shapedHopperPressures, type FacePairPressures, type HopperSolid } from './rectangular-hopper.js';
+export { bendingLineLoad, edgeDirection, edgeLength, edgePoint, shearFlowLineLoad, tubeProperties, type TubeProperties } from './rectangular-transfer.js';
+export { isNormalToWalls, rectangularEffectiveSlenderness, rectangularSectionForceCoefficient } from './rectangular-wind.js';
+export { cosineSeriesZoneErrors, evenCosineSeries, fitCosineSeries, flowChannelEccentricity, flowChannelEtaRange, flowChannelGeometry, flowChannelPressures, flowChannelZones, seriesFirstMoment, seriesIntegral, FLOW_CHANNEL_RADIUS_RATIOS, type FlowChannelGeometry, type FlowChannelPressureParameters, type FlowChannelPressures, type FlowChannelState, type SeriesFit, type WallZone, type WallZoneName } from './flow-channel.js';
+export { flowChannelCaseName } from './circular.js';

@@ -94,6 +94,7 @@ export const binSpecInput = z.strictObject(
         outletEccentricity: quantity({ min: 0, max: 30, unit: 'm' }).default(0),
         eccentricityAngle: quantity({ min: -360, max: 360, unit: 'degrees' }).default(0),
         patchLoadMethod: choice(['patch', 'uniform-increase']).default('patch'),
+        actionAssessmentClass: wholeNumber(1, 3, 'the action assessment class').optional(),
         wallThickness: quantity({ min: 2, max: 60, unit: 'mm' }),
         hopper: z.strictObject(
           {

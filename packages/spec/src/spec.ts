@@ -20,6 +20,8 @@ export interface CircularBinSpec {
   outletEccentricity: number;
   /** Patch loads (EN 1991-4 5.2.1.2, 5.2.2.2) or, in action assessment class 2 only, the substitute uniform increase (5.2.1.4, 5.2.2.4). */
   patchLoadMethod: 'patch' | 'uniform-increase';
+  /** Action assessment class set by the engineer (EN 1991-4 2.5): may raise, never lower, the class of Table 2.1. */
+  actionAssessmentClass?: 1 | 2 | 3;
   /** Direction of the eccentricities from +X, rad. */
   eccentricityAngle: number;
   hopper: { apexHalfAngle: number; outletDiameter: number; thickness: number };
@@ -40,6 +42,8 @@ export interface RectangularBinSpec {
   topSurface: 'level' | 'pile';
   /** 'pyramid': four sloping faces; 'wedge': two faces sloping toward a slot along X, vertical end walls. */
   hopper: { kind: 'pyramid' | 'wedge'; height: number; outletLengthX: number; outletLengthY: number; thickness: number };
+  /** Action assessment class set by the engineer (EN 1991-4 2.5): may raise, never lower, the class of Table 2.1. */
+  actionAssessmentClass?: 1 | 2 | 3;
   steelDensity: number;
 }
 
@@ -264,6 +268,7 @@ function normaliseBin(bin: BinSpecParsed['bin']): CircularBinSpec | RectangularB
       lengthX,
       lengthY: bin.lengthY as number,
       ...common,
+      ...(bin.actionAssessmentClass !== undefined ? { actionAssessmentClass: bin.actionAssessmentClass as 1 | 2 | 3 } : {}),
       hopper: { kind, height: bin.hopper.height as number, outletLengthX: kind === 'wedge' ? lengthX : (bin.hopper.outletLengthX as number), outletLengthY: bin.hopper.outletLengthY as number, thickness: mmToM(bin.hopper.thickness) },
     };
   }
@@ -274,6 +279,7 @@ function normaliseBin(bin: BinSpecParsed['bin']): CircularBinSpec | RectangularB
     fillingEccentricity: bin.fillingEccentricity,
     outletEccentricity: bin.outletEccentricity,
     patchLoadMethod: bin.patchLoadMethod,
+    ...(bin.actionAssessmentClass !== undefined ? { actionAssessmentClass: bin.actionAssessmentClass as 1 | 2 | 3 } : {}),
     eccentricityAngle: degToRad(bin.eccentricityAngle),
     hopper: { apexHalfAngle: degToRad(bin.hopper.apexHalfAngle as number), outletDiameter: bin.hopper.outletDiameter as number, thickness: mmToM(bin.hopper.thickness) },
   };
