@@ -680,6 +680,7 @@ const MAX_COLUMN_ROUNDS = 4;
 export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}): Promise<DesignOutcome> {
   circularBinOf(spec);
   const rounds: Array<{ modelColumn: string; outcome: DesignOutcome }> = [];
+  const failedRounds: Array<{ modelColumn: string; message: string }> = [];
   let modelColumn = spec.support.columnSection;
   const progress = explicit.progress ?? (() => undefined);
   const maxRounds = explicit.columnStiffnessRounds ?? MAX_COLUMN_ROUNDS;
@@ -688,7 +689,16 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
   }
   for (let round = 1; round <= maxRounds; round++) {
     const roundSpec: BinSpec = modelColumn === spec.support.columnSection ? spec : { ...spec, support: { ...spec.support, columnSection: modelColumn } };
-    const outcome = await designWithModelColumn(roundSpec, explicit);
+    let outcome: DesignOutcome;
+    try {
+      outcome = await designWithModelColumn(roundSpec, explicit);
+    } catch (error) {
+      // A later round that cannot be designed (a guard, a lift-off) leaves the earlier rounds standing.
+      if (round === 1 || !(error instanceof DesignError)) throw error;
+      progress(`column stiffness: with ${modelColumn} in the girder model the design stops (${error.message}); keeping the earlier rounds`);
+      failedRounds.push({ modelColumn, message: error.message });
+      break;
+    }
     rounds.push({ modelColumn, outcome });
     // The integer program's column (the one-design fallback may have kept the model's instead).
     const chosen = outcome.result.optimisation.columnStiffness?.chosenColumn ?? outcome.result.members.find((member) => member.id === COLUMN_MEMBER_ID)?.section;
@@ -700,7 +710,7 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     if (round < maxRounds) progress(`column stiffness: the design chose ${chosen} columns, not the model's ${modelColumn}; designing again with ${chosen} in the girder model`);
     modelColumn = chosen;
   }
-  if (rounds.length === 1) return (rounds[0] as { outcome: DesignOutcome }).outcome;
+  if (rounds.length === 1 && failedRounds.length === 0) return (rounds[0] as { outcome: DesignOutcome }).outcome;
   const columnOf = (outcome: DesignOutcome) => outcome.result.members.find((member) => member.id === COLUMN_MEMBER_ID)?.section;
   const chosenOf = (outcome: DesignOutcome) => outcome.result.optimisation.columnStiffness?.chosenColumn ?? columnOf(outcome);
   const verified = rounds.filter((entry) => entry.outcome.result.status === 'verified');
@@ -713,16 +723,19 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
   });
   const cheapest = (list: typeof rounds) => [...list].sort((a, b) => (a.outcome.result.optimisation.objectiveValue ?? Infinity) - (b.outcome.result.optimisation.objectiveValue ?? Infinity))[0];
   const pick = cheapest(consistent) ?? cheapest(confirmed) ?? (rounds[rounds.length - 1] as (typeof rounds)[number]);
-  const columnRounds = rounds.map((entry) => ({
-    modelColumn: entry.modelColumn,
-    chosenColumn: chosenOf(entry.outcome) ?? null,
-    column: columnOf(entry.outcome) ?? null,
-    status: entry.outcome.result.status,
-    objectiveValue: entry.outcome.result.optimisation.objectiveValue ?? null,
-    steelMass: entry.outcome.result.totals.steelMass,
-  }));
+  const columnRounds: NonNullable<DesignResult['optimisation']['columnRounds']> = [
+    ...rounds.map((entry) => ({
+      modelColumn: entry.modelColumn,
+      chosenColumn: chosenOf(entry.outcome) ?? null,
+      column: columnOf(entry.outcome) ?? null,
+      status: entry.outcome.result.status,
+      objectiveValue: entry.outcome.result.optimisation.objectiveValue ?? null,
+      steelMass: entry.outcome.result.totals.steelMass,
+    })),
+    ...failedRounds.map((entry) => ({ modelColumn: entry.modelColumn, chosenColumn: null, column: null, status: 'failed' as const, objectiveValue: null, steelMass: null, message: entry.message })),
+  ];
   const { result } = pick.outcome;
-  const note = `; the column stiffness was iterated over ${rounds.length} designs (${columnRounds.map((entry) => `${entry.modelColumn} in the model, ${entry.chosenColumn ?? 'none'} chosen`).join('; ')}); this design has ${pick.modelColumn} in the girder model`;
+  const note = `; the column stiffness was iterated over ${columnRounds.length} designs (${columnRounds.map((entry) => (entry.status === 'failed' ? `${entry.modelColumn} in the model: not designed` : `${entry.modelColumn} in the model, ${entry.chosenColumn ?? 'none'} chosen`)).join('; ')}); this design has ${pick.modelColumn} in the girder model`;
   return {
     ...pick.outcome,
     result: { ...result, input: spec, optimisation: { ...result.optimisation, message: `${result.optimisation.message}${note}`, columnRounds } },

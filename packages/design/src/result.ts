@@ -242,10 +242,11 @@ export interface OptimisationSummary {
   /**
    * Present when the column stiffness was iterated (the first design chose a column other than
    * support.columnSection): one entry per whole design, with the column in its girder model, the
-   * column the integer program chose and the column the design kept (`column`). The result is the
+   * column the integer program chose and the column the design kept (`column`); a round that could
+   * not be designed is `failed` with its `message`, and the earlier rounds stand. The result is the
    * least-cost round whose chosen column is its model's.
    */
-  columnRounds?: Array<{ modelColumn: string; chosenColumn: string | null; column: string | null; status: 'verified' | 'infeasible'; objectiveValue: number | null; steelMass: number }>;
+  columnRounds?: Array<{ modelColumn: string; chosenColumn: string | null; column: string | null; status: 'verified' | 'infeasible' | 'failed'; objectiveValue: number | null; steelMass: number | null; message?: string }>;
 }
 
 /** Serviceability settings and information (the checks themselves are rows of `utilisations`). */
