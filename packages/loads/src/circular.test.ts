@@ -84,7 +84,7 @@ describe('squat and intermediate filling (EN 1991-4 5.3.1.1)', () => {
   });
 });
 
-describe('substitute uniform pressure increase in place of the patch loads (AAC 2; EN 1991-4 5.2.1.4, 5.2.2.4, from memory)', () => {
+describe('substitute uniform pressure increase in place of the patch loads (AAC 2; EN 1991-4 5.2.3, from memory)', () => {
   // 6 m x 12 m wheat bin with a 20 mm wall: about 330 t (AAC 2, Table 2.1), d_c/t = 300 (thin-walled).
   const t = 0.02;
   const DEG = Math.PI / 180;
@@ -158,11 +158,11 @@ describe('substitute uniform pressure increase in place of the patch loads (AAC 
     };
     const aac3 = attempt({ actionAssessmentClass: 3 });
     expect(aac3).toMatchObject({ name: 'LoadsError', code: 'BAD_INPUT', path: 'bin.patchLoadMethod' });
-    expect((aac3 as Error).message).toBe("bin.patchLoadMethod 'uniform-increase' is allowed in action assessment class 2 only (EN 1991-4 5.2.1.4, 5.2.2.4); the bin is in class 3: use 'patch'");
+    expect((aac3 as Error).message).toBe("bin.patchLoadMethod 'uniform-increase' is allowed in action assessment class 2 only (EN 1991-4 5.2.3); the bin is in class 3: use 'patch'");
     // 2 m x 4 m bin: about 12 t, AAC 1 (Table 2.1: below 100 t).
     const aac1 = attempt({ diameter: 2, cylinderHeight: 4, fillHeight: 4, hopper: { apexHalfAngle: 30 * DEG, outletDiameter: 0.2, thickness: 0.004 }, wallThickness: 0.004 });
     expect(aac1).toMatchObject({ name: 'LoadsError', code: 'BAD_INPUT', path: 'bin.patchLoadMethod' });
-    expect((aac1 as Error).message).toBe("bin.patchLoadMethod 'uniform-increase' is allowed in action assessment class 2 only (EN 1991-4 5.2.1.4, 5.2.2.4); the bin is in class 1: use 'patch'");
+    expect((aac1 as Error).message).toBe("bin.patchLoadMethod 'uniform-increase' is allowed in action assessment class 2 only (EN 1991-4 5.2.3); the bin is in class 1: use 'patch'");
     const unknown = attempt({ patchLoadMethod: 'smeared' as unknown as 'patch' });
     expect((unknown as Error).message).toBe("bin.patchLoadMethod must be 'patch' or 'uniform-increase'; got 'smeared'");
   });

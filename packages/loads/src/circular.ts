@@ -361,7 +361,7 @@ function flowChannelLoadCases(ctx: FlowChannelContext): { cases: SupportLineCase
  * hopper: it goes in a case of its own (Q_s,b) so that the symmetric cases still close on the weight.
  * Patch loads and wind reach the support line as global bending of the shell (see `globalBending`).
  * In AAC 2, `bin.patchLoadMethod: 'uniform-increase'` replaces the patch cases by the substitute
- * uniform pressure increase (EN 1991-4 5.2.1.4, 5.2.2.4): two further solid states Q_s,f,u and
+ * uniform pressure increase (EN 1991-4 5.2.3): two further solid states Q_s,f,u and
  * Q_s,e,u with the wall friction raised by (1 + zeta C_p), still closing on the weight.
  * Large-eccentricity discharge (e_o > 0.25 d_c) in a slender bin of AAC 3 adds the flow-channel cases
  * Q_s,c25, Q_s,c40 and Q_s,c60 (EN 1991-4 5.2.4.3, see `flowChannelLoadCases`); squat and
@@ -427,7 +427,7 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
   }
   const patchLoadMethod = bin.patchLoadMethod ?? 'patch';
   if (patchLoadMethod === 'uniform-increase' && aac !== 2) {
-    throw new LoadsError('BAD_INPUT', 'bin.patchLoadMethod', `bin.patchLoadMethod 'uniform-increase' is allowed in action assessment class 2 only (EN 1991-4 5.2.1.4, 5.2.2.4); the bin is in class ${aac}: use 'patch'`);
+    throw new LoadsError('BAD_INPUT', 'bin.patchLoadMethod', `bin.patchLoadMethod 'uniform-increase' is allowed in action assessment class 2 only (EN 1991-4 5.2.3); the bin is in class ${aac}: use 'patch'`);
   }
   const thinWalled = dc / bin.wallThickness > 200;
 
@@ -567,14 +567,14 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
   if (aac === 1) {
     notes.push('AAC 1: patch loads are not applied; the enlarged discharge factors C_h and C_w stand for them (EN 1991-4 5.2.2.1).');
   } else if (patchLoadMethod === 'uniform-increase') {
-    // EN 1991-4 5.2.1.4, 5.2.2.4 (expressions from memory): p_h,u = (1 + zeta C_p) p_h and
+    // EN 1991-4 5.2.3 (expressions from memory): p_h,u = (1 + zeta C_p) p_h and
     // p_w,u = (1 + zeta C_p) p_w at every depth. Axisymmetric, so no global bending of the shell. The
     // friction resultant is the integral of p_w,u down the wall, so it takes the same factor:
     // n_z,u(h_c) = (1 + zeta C_p) n_zSk(h_c). The solid still weighs W_s: what the wall carries more,
     // the hopper carries less (at most the weight in the cylinder goes to the wall), so the vertical
     // total on the support line is W_s and the inward pull of the hopper falls.
     const zeta = uniformIncreaseZeta(dc, bin.wallThickness);
-    derivation.push({ symbol: 'zeta', description: 'factor of the substitute uniform pressure increase (replaces the patch loads, AAC 2)', expression: 'max(1, 0.5 + 0.01 d_c/t)', value: zeta, unit: '-', clause: 'EN 1991-4 5.2.1.4 (from memory)' });
+    derivation.push({ symbol: 'zeta', description: 'factor of the substitute uniform pressure increase (replaces the patch loads, AAC 2)', expression: 'max(1, 0.5 + 0.01 d_c/t)', value: zeta, unit: '-', clause: 'EN 1991-4 5.2.3 (from memory)' });
     const increasedCase = (name: string, factor: number, Ch: number, Cw: number, label: string, clause: string) => {
       if (factor <= 1) return;
       const nzU = factor * Cw * atW.nzSk;
@@ -597,13 +597,13 @@ export function circularBinLoads(input: CircularBinLoadInput): LoadSet {
         { symbol: `n_r(${name})`, description: `inward radial pull of the hopper, ${label}, uniform increase`, expression: 'F_h,u tan(beta) / (2 pi r_s)', value: increased.radialLineLoad, unit: 'N/m', clause: 'statics of the hopper meridian' },
       );
     };
-    increasedCase(FILLING_UNIFORM_INCREASE_CASE, uniformIncreaseFactor(zeta, patch.Cpf), 1, 1, 'filling', 'EN 1991-4 5.2.1.4 (from memory)');
-    increasedCase(DISCHARGE_UNIFORM_INCREASE_CASE, uniformIncreaseFactor(zeta, patch.Cpe), discharge.Ch, discharge.Cw, 'discharge', 'EN 1991-4 5.2.2.4 (from memory)');
+    increasedCase(FILLING_UNIFORM_INCREASE_CASE, uniformIncreaseFactor(zeta, patch.Cpf), 1, 1, 'filling', 'EN 1991-4 5.2.3 (from memory)');
+    increasedCase(DISCHARGE_UNIFORM_INCREASE_CASE, uniformIncreaseFactor(zeta, patch.Cpe), discharge.Ch, discharge.Cw, 'discharge', 'EN 1991-4 5.2.3 (from memory)');
     if (uniformIncrease.length === 0) {
       notes.push('AAC 2, substitute uniform pressure increase: C_pf = C_pe = 0 (h_c/d_c <= 1), so there is nothing to increase and no patch case either.');
     } else {
       notes.push(
-        'AAC 2, substitute uniform pressure increase in place of the patch loads (EN 1991-4 5.2.1.4, 5.2.2.4; expressions from memory, not yet confirmed against the text): the increase is axisymmetric, so the support line gets no global bending from it, unlike the patch method, whose overturning moment the girder then does not see. The increased wall friction moves load from the hopper to the wall: the vertical total stays the weight of the solid and the inward pull of the hopper is smaller; the cases without the increase (Q_s,f, Q_s,e) stay as alternatives, so the full hopper pull is still checked.',
+        'AAC 2, substitute uniform pressure increase in place of the patch loads (EN 1991-4 5.2.3; expressions from memory, not yet confirmed against the text): the increase is axisymmetric, so the support line gets no global bending from it, unlike the patch method, whose overturning moment the girder then does not see. The increased wall friction moves load from the hopper to the wall: the vertical total stays the weight of the solid and the inward pull of the hopper is smaller; the cases without the increase (Q_s,f, Q_s,e) stay as alternatives, so the full hopper pull is still checked.',
       );
     }
   } else if (!thinWalled) {

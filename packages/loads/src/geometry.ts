@@ -36,7 +36,7 @@ export interface CircularBin {
   /**
    * How the unsymmetrical loads of the stored solid are represented: 'patch' (default) for the patch
    * loads of EN 1991-4 5.2.1.2-5.2.1.3 and 5.2.2.2-5.2.2.3, or 'uniform-increase' for the substitute
-   * uniform pressure increase of 5.2.1.4 and 5.2.2.4, which the standard allows in action assessment
+   * uniform pressure increase of 5.2.3, which the standard allows in action assessment
    * class 2 only (refused in classes 1 and 3).
    */
   patchLoadMethod?: PatchLoadMethod;

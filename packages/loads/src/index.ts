@@ -48,3 +48,4 @@ export { bendingLineLoad, edgeDirection, edgeLength, edgePoint, shearFlowLineLoa
 export { isNormalToWalls, rectangularEffectiveSlenderness, rectangularSectionForceCoefficient } from './rectangular-wind.js';
 export { cosineSeriesZoneErrors, evenCosineSeries, fitCosineSeries, flowChannelEccentricity, flowChannelEtaRange, flowChannelGeometry, flowChannelPressures, flowChannelZones, seriesFirstMoment, seriesIntegral, FLOW_CHANNEL_RADIUS_RATIOS, type FlowChannelGeometry, type FlowChannelPressureParameters, type FlowChannelPressures, type FlowChannelState, type SeriesFit, type WallZone, type WallZoneName } from './flow-channel.js';
 export { flowChannelCaseName } from './circular.js';
+export { bandForce, levelOfLargestBandMoment, NON_CIRCULAR_PATCH_RATIO, patchWalls, rectangularPatchCaseName, type PatchWall } from './rectangular-patch.js';

@@ -100,7 +100,7 @@ describe('support-line invariants (fast-check, fixed seed)', () => {
     );
   });
 
-  it('AAC 2 with the uniform pressure increase (EN 1991-4 5.2.1.4, 5.2.2.4, from memory): plates plus each increased solid state weigh what they weigh, the hopper pull is never above filling, no patch cases (0.1 %)', () => {
+  it('AAC 2 with the uniform pressure increase (EN 1991-4 5.2.3, from memory): plates plus each increased solid state weigh what they weigh, the hopper pull is never above filling, no patch cases (0.1 %)', () => {
     let checked = 0;
     fc.assert(
       fc.property(binArbitrary, (p) => {

@@ -121,6 +121,8 @@ function expectedWeights(input: RectangularBinLoadInput, loads: RectangularLoadS
     'Q_s,b': (step('C_b') - 1) * step('p_vf(h_c)') * input.bin.lengthX * input.bin.lengthY,
   };
   for (const c of loads.cases) if (c.action === 'wind' || c.action === 'seismic') weights[c.name] = 0;
+  // The patch band on one wall (EN 1991-4 5.2.1.4, 5.2.2.4, from memory) only overturns: no weight.
+  for (const c of loads.cases) if (/^Q_s,p[fe],[NESW]$/.test(c.name)) weights[c.name] = 0;
   return weights;
 }
 
@@ -216,6 +218,42 @@ describe('rectangular bins on their support line: invariants (fast-check, fixed 
       }),
       { seed: SEED, numRuns: RUNS },
     );
+  });
+
+  it('patch band cases (EN 1991-4 5.2.1.4, 5.2.2.4, from memory): four per state exactly when AAC >= 2 and h_c/d_c > 1; each has zero net vertical load, the stated moment and base shear (statics)', () => {
+    let withPatches = 0;
+    let without = 0;
+    fc.assert(
+      fc.property(binArbitrary, (p) => {
+        const input = valid(p);
+        fc.pre(input !== undefined);
+        if (!input) return;
+        const loads = rectangularBinLoads(input);
+        const a = input.bin.lengthX;
+        const b = input.bin.lengthY;
+        const patches = loads.cases.filter((c) => /^Q_s,p[fe],[NESW]$/.test(c.name));
+        const expected = loads.classification.actionAssessmentClass >= 2 && input.bin.fillHeight / Math.min(a, b) > 1;
+        expect(patches.length).toBe(expected ? 8 : 0);
+        if (expected) withPatches++;
+        else without++;
+        for (const c of patches) {
+          const r = resultants(loads, c.name, a, b);
+          const M = c.overturningMoment ?? { x: Number.NaN, y: Number.NaN };
+          const H = c.horizontalResultant ?? { x: Number.NaN, y: Number.NaN };
+          const scale = Math.hypot(M.x, M.y);
+          expect(scale).toBeGreaterThan(0);
+          expect(c.verticalResultant).toBe(0);
+          expect(Math.abs(r.vertical) * Math.max(a, b)).toBeLessThan(1e-9 * scale + 1e-6);
+          expect(Math.hypot(r.my - M.x, -r.mx - M.y)).toBeLessThan(1e-6 * scale);
+          expect(Math.hypot(r.hx - H.x, r.hy - H.y)).toBeLessThan(1e-4 * Math.hypot(H.x, H.y));
+          expect(loads.edges.filter((e) => e.case === c.name).reduce((s, e) => s + e.verticalResultant, 0)).toBeCloseTo(0, 6);
+        }
+        for (const combination of loads.combinations) expect(Object.keys(combination.factors).filter((k) => /^Q_s,p[fe],/.test(k)).length).toBeLessThanOrEqual(1);
+      }),
+      { seed: SEED, numRuns: RUNS },
+    );
+    expect(withPatches).toBeGreaterThan(RUNS / 10);
+    expect(without).toBeGreaterThan(RUNS / 20);
   });
 
   it('every pressure is finite and not negative; wall pressures start at the highest wall contact, hopper pressures are positive (EN 1991-4 5.2-5.3, 6.3)', () => {

@@ -23,6 +23,7 @@ import { hopperWallVerticalForce, rectangularHopperPressures, type FacePairPress
 import { bendingLineLoad, edgeLength, edgePoint, shearFlowLineLoad, tubeProperties } from './rectangular-transfer.js';
 import type { EdgeLoad, RectangularBinLoadInput, RectangularLoadCase, RectangularLoadSet, RectangularPressureProfile } from './rectangular-types.js';
 import { validateRectangularInput } from './rectangular-validate.js';
+import { bandForce, levelOfLargestBandMoment, NON_CIRCULAR_PATCH_RATIO, patchWalls, rectangularPatchCaseName, type PatchWall } from './rectangular-patch.js';
 import { rectangularEffectiveSlenderness, rectangularSectionForceCoefficient } from './rectangular-wind.js';
 import { slendernessClass } from './slenderness.js';
 import { squatProfile } from './squat.js';
@@ -66,7 +67,8 @@ function plainVector(v: { x: number; y: number } | undefined): { x: number; y: n
 /**
  * Loads of a rectangular bin on its support line (the rectangle of the internal plan beneath the
  * walls, at the transition; plan axes and edge names in rectangular-types.ts): self weight, stored
- * solid at filling and discharge (EN 1991-4 5, 6), roof, equipment, snow, wind (EN 1991-1-4 7.6) and
+ * solid at filling and discharge with the non-circular patch band (EN 1991-4 5, 6; the band from
+ * memory, rectangular-patch.ts), roof, equipment, snow, wind (EN 1991-1-4 7.6) and
  * an equivalent static seismic action, with their EN 1990 combinations.
  *
  * Stored solid: wall friction follows EN 1991-4 5.2-5.3 with A/U = ab / (2 (a + b)) and d_c the
@@ -78,7 +80,7 @@ function plainVector(v: { x: number; y: number } | undefined): { x: number; y: n
  * the vertical. The vertical end walls of a wedge carry their own weight only (plane flow). Both
  * symmetric solid cases carry exactly the weight of the solid.
  *
- * Overturning (wind, seismic, eccentric roof loads) reaches the support line by beam theory of the
+ * Overturning (wind, seismic, eccentric roof loads, the patch band) reaches the support line by beam theory of the
  * walls as a thin-walled rectangular tube: vertical n = Mx' x_r / I_y + My' y_r / I_x, and base shear
  * as the tube's shear flow tangential to the edges (rectangular-transfer.ts).
  */
@@ -261,18 +263,81 @@ export function rectangularBinLoads(input: RectangularBinLoadInput): Rectangular
   }
   if (Cb > 1) derivation.push({ symbol: 'dF_b', description: 'vertical force of the hopper bottom overpressure, above the weight of the solid by design', expression: '(C_b - 1) p_vf(h_c) a b', value: magnifierForce, unit: 'N', clause: 'EN 1991-4 6.1.2' });
 
-  // Patch loads: not applied (see the note).
+  // Patch loads of a non-circular bin (EN 1991-4 5.2.1.4, 5.2.2.4; from memory): a band of outward
+  // pressure 0.36 p_p of height s across the full width of one wall, at any level (rectangular-patch.ts).
+  const patchFilling: Array<{ name: string; wall: PatchWall }> = [];
+  const patchDischarge: Array<{ name: string; wall: PatchWall }> = [];
   if (aac === 1) {
     notes.push('AAC 1: patch loads are not applied; the enlarged discharge factors C_h and C_w stand for them (EN 1991-4 5.2.2.1).');
   } else {
     const patch = patchFactors(aspect, solid.patchLoadFactor, 0, 0);
+    const s = patchHeight(dc);
     derivation.push(
-      { symbol: 'C_pf', description: 'filling patch load factor (for the wall design; not applied to the support line)', expression: '0.21 C_op (1 + 2 E^2)(1 - exp(-1.5 (h_c/d_c - 1))), E = 0', value: patch.Cpf, unit: '-', clause: 'EN 1991-4 5.2.1.2 (from memory)' },
-      { symbol: 'C_pe', description: 'discharge patch load factor (for the wall design; not applied to the support line)', expression: '0.42 C_op (1 + 2 E^2)(1 - exp(-1.5 (h_c/d_c - 1))), E = 0', value: patch.Cpe, unit: '-', clause: 'EN 1991-4 5.2.2.2 (from memory)' },
-      { symbol: 's', description: 'height of the patch zone (d_c the shorter side)', expression: 'pi d_c / 16', value: patchHeight(dc), unit: 'm', clause: 'EN 1991-4 5.2.1.2 (from memory)' },
+      { symbol: 'C_pf', description: 'filling patch load factor (outlet centred, filling centred: E = 0)', expression: '0.21 C_op (1 + 2 E^2)(1 - exp(-1.5 (h_c/d_c - 1))), E = 0; 0 for h_c/d_c <= 1', value: patch.Cpf, unit: '-', clause: 'EN 1991-4 5.2.1.2 (from memory)' },
+      { symbol: 'C_pe', description: 'discharge patch load factor (E = 0)', expression: '0.42 C_op (1 + 2 E^2)(1 - exp(-1.5 (h_c/d_c - 1))), E = 0; 0 for h_c/d_c <= 1', value: patch.Cpe, unit: '-', clause: 'EN 1991-4 5.2.2.2 (from memory)' },
+      { symbol: 's', description: 'height of the patch band (d_c the shorter side)', expression: 'pi d_c / 16', value: s, unit: 'm', clause: 'EN 1991-4 5.2.1.2, 5.2.1.4 (from memory)' },
     );
-    if (patch.Cpf > 0 || patch.Cpe > 0) {
-      notes.push('Patch loads are not applied to the support line of the rectangular bin. For non-circular silos EN 1991-4 replaces the circular patch by a band of pressure (recalled as 0.36 p_p over the patch height s; not confirmed against the text), and we do not have from the text how the band is distributed round the walls, so whether it leaves a net horizontal force on the bin is not established here. The walls must be designed for it. If the band acts on one wall of length L only, its net force F_p = 0.36 p_p s L at depth z_p overturns the bin by F_p (h_c - z_p): check that by hand with the tube rule of the wind cases.');
+    if (patch.Cpf <= 0 && patch.Cpe <= 0) {
+      notes.push(`No patch loads: C_pf = C_pe = 0 (h_c/d_c = ${aspect.toFixed(3)}${aspect <= 1 ? ' <= 1' : ', C_op = 0'}; EN 1991-4 5.2.1.2, 5.2.2.2, from memory).`);
+    } else {
+      // The band lies on the wall below its highest contact: its centre between h_o + s/2 and h_c - s/2.
+      const pressureAt = (z: number) => N.profile.at(z).ph;
+      const zp = levelOfLargestBandMoment(pressureAt, hc, h0 + s / 2, hc - s / 2);
+      const arm = hc - zp;
+      const phAtBand = pressureAt(zp);
+      derivation.push(
+        { symbol: 'z_p', description: 'depth of the band centre below the equivalent surface: the level of the largest overturning moment about the support level (the transition), the same for filling and discharge since both band pressures are proportional to p_hf(z)', expression: 'z maximising p_hf(z) (h_c - z), h_o + s/2 <= z <= h_c - s/2', value: zp, unit: 'm', clause: 'EN 1991-4 5.2.1.4 (band at any level; from memory)' },
+        { symbol: 'p_hf(z_p)', description: 'horizontal filling pressure at the band centre (max normal pressure properties)', expression: slenderness === 'slender' ? 'p_ho (1 - exp(-z_p/z_o))' : 'p_ho (1 - ((z_p - h_o)/(z_o - h_o) + 1)^n)', value: phAtBand, unit: 'Pa', clause: pressureClause },
+      );
+      const states = [
+        { state: 'filling' as const, factor: patch.Cpf, ch: 1, sub: 'pf', solidCase: SOLID_FILLING_CASE, clause: 'EN 1991-4 5.2.1.4 (from memory)', patchExpression: 'C_pf p_hf(z_p)', patchClause: 'EN 1991-4 5.2.1.2 (from memory)', list: patchFilling },
+        { state: 'discharge' as const, factor: patch.Cpe, ch: discharge.Ch, sub: 'pe', solidCase: SOLID_DISCHARGE_CASE, clause: 'EN 1991-4 5.2.2.4 (from memory)', patchExpression: 'C_pe p_he(z_p) = C_pe C_h p_hf(z_p)', patchClause: 'EN 1991-4 5.2.2.2 (from memory)', list: patchDischarge },
+      ];
+      const walls = patchWalls(a, b);
+      for (const st of states) {
+        if (st.factor <= 0) continue;
+        const patchPressure = st.factor * st.ch * phAtBand;
+        const bandPressure = NON_CIRCULAR_PATCH_RATIO * patchPressure;
+        derivation.push(
+          { symbol: `p_${st.sub}`, description: `${st.state} patch pressure of the circular rule at the band centre`, expression: st.patchExpression, value: patchPressure, unit: 'Pa', clause: st.patchClause },
+          { symbol: `p_${st.sub},nc`, description: `${st.state} band pressure of a non-circular bin, outward on one wall over the band height s`, expression: `0.36 p_${st.sub}`, value: bandPressure, unit: 'Pa', clause: st.clause },
+        );
+        for (const [label, width] of [['north, south walls, B = a', a], ['east, west walls, B = b', b]] as const) {
+          const F = bandForce(bandPressure, s, width);
+          derivation.push(
+            { symbol: `F_${st.sub} (${label})`, description: `net horizontal force of the ${st.state} band on one wall (${label}), not balanced by the opposite wall: base shear at the support level`, expression: `p_${st.sub},nc s B`, value: F, unit: 'N', clause: `statics of the band of ${st.clause}` },
+            { symbol: `M_${st.sub} (${label})`, description: `overturning moment of the ${st.state} band (${label}) about the support level (the transition, as for wind and seismic)`, expression: `F_${st.sub} (h_c - z_p)`, value: F * arm, unit: 'N m', clause: `statics of the band of ${st.clause}` },
+          );
+        }
+        for (const wall of walls) {
+          const name = rectangularPatchCaseName(st.state, wall);
+          const F = bandForce(bandPressure, s, wall.width);
+          const M = F * arm;
+          const { x: ox, y: oy } = wall.outward;
+          addCase(
+            {
+              name,
+              description: `${st.state} patch band on the ${wall.edge} wall (from memory): p_${st.sub},nc = 0.36 p_${st.sub} = ${(bandPressure / 1000).toFixed(3)} kPa outward over the full width B = ${wall.width.toFixed(3)} m and height s = ${s.toFixed(3)} m, centred ${zp.toFixed(3)} m below the equivalent surface (${arm.toFixed(3)} m above the support level); unbalanced: base shear and overturning moment toward the ${wall.edge}; it comes with ${st.solidCase}`,
+              kind: 'variable',
+              action: 'solid',
+              verticalResultant: 0,
+              horizontalResultant: { x: F * ox, y: F * oy },
+              overturningMoment: { x: M * oy, y: -M * ox },
+              distribution: `${st.clause} band on one wall, F = p_nc s B at z_p, M = F (h_c - z_p); ${tubeDistribution}`,
+            },
+            { moment: { x: M * ox, y: M * oy }, shear: { x: F * ox, y: F * oy } },
+          );
+          st.list.push({ name, wall });
+        }
+      }
+      const longer = Math.max(a, b);
+      const largerState = Math.max(patch.Cpf, patch.Cpe * discharge.Ch);
+      const deepest = bandForce(NON_CIRCULAR_PATCH_RATIO * largerState * pressureAt(hc - s / 2), s, longer);
+      const deepestAtZp = bandForce(NON_CIRCULAR_PATCH_RATIO * largerState * phAtBand, s, longer);
+      notes.push(
+        `Patch loads of the rectangular bin (EN 1991-4 5.2.1.4 and 5.2.2.4 for non-circular silos, from memory, not confirmed against the text): an outward band pressure p_pf,nc = 0.36 p_pf at filling and p_pe,nc = 0.36 p_pe at discharge over a horizontal band of height s = pi d_c/16 (d_c the shorter side) across the full width of one wall, at any level. For the support the band is taken on one wall, not balanced by the opposite one, at the level of the largest overturning moment (z_p = ${zp.toFixed(3)} m, the same for filling and discharge, in every action assessment class): base shear F = p_nc s B and overturning moment F (h_c - z_p) about the support level (the transition, as for wind and seismic), carried to the edges by the tube rules of the wind cases. One case per wall and state (${[...patchFilling, ...patchDischarge].map((p) => p.name).join(', ')}); each is an alternative of the solid action with its own state (Q_s,pf,* with Q_s,f, Q_s,pe,* with Q_s,e), so a combination takes at most one patch case. The solid at filling without a patch is kept as the first alternative, which the seismic design situation takes.`,
+        `Patch band (from memory): thin- and thick-walled rectangular bins take the same band (the non-circular rule makes no distinction, as far as we know; unlike the thick-walled circular bin, whose two opposite patches balance). A band lower on the wall gives more base shear with less moment (on the ${longer.toFixed(2)} m wall, with its centre at h_c - s/2, up to ${(deepest / 1000).toFixed(1)} kN in the larger of the two states, against ${(deepestAtZp / 1000).toFixed(1)} kN at z_p): not a separate case. The walls must also be designed for the band as plates; that is not done here.`,
+      );
     }
   }
 
@@ -289,7 +354,12 @@ export function rectangularBinLoads(input: RectangularBinLoadInput): Rectangular
   }
   const groups: VariableGroup[] = [];
   const magnifier = Cb > 1 ? [HOPPER_MAGNIFIER_CASE] : [];
-  groups.push({ action: 'solid', symbol: 'Q_s', alternatives: [{ label: 'filling', cases: [SOLID_FILLING_CASE, ...magnifier] }, { label: 'discharge', cases: [SOLID_DISCHARGE_CASE, ...magnifier] }] });
+  // The solid's states: filling (first: the seismic design situation takes it), each filling patch
+  // with Q_s,f, and discharge, which with patch cases is one alternative per patch with Q_s,e (the
+  // mirror walls give both signs, so the discharge without a patch does not govern a linear effect).
+  const fillingAlternatives = [{ label: 'filling', cases: [SOLID_FILLING_CASE, ...magnifier] }, ...patchFilling.map((p) => ({ label: `filling, patch on the ${p.wall.edge} wall`, cases: [SOLID_FILLING_CASE, p.name, ...magnifier] }))];
+  const dischargeAlternatives = patchDischarge.length > 0 ? patchDischarge.map((p) => ({ label: `discharge, patch on the ${p.wall.edge} wall`, cases: [SOLID_DISCHARGE_CASE, p.name, ...magnifier] })) : [{ label: 'discharge', cases: [SOLID_DISCHARGE_CASE, ...magnifier] }];
+  groups.push({ action: 'solid', symbol: 'Q_s', alternatives: [...fillingAlternatives, ...dischargeAlternatives] });
   const roofImposed = (input.roof?.imposedLoad ?? 0) * roofArea;
   if (roofImposed > 0) {
     addCase({ name: ROOF_IMPOSED_CASE, description: 'roof imposed load on the outer plan (category H)', kind: 'variable', action: 'roof', verticalResultant: roofImposed, distribution: uniformRoof }, { uniform: roofImposed / U });

@@ -66,8 +66,8 @@ export function thinWalledPatchForce(diameter: number, patchPressure: number): n
 
 /**
  * Factor zeta of the substitute uniform pressure increase that may replace the patch loads of a
- * circular bin in action assessment class 2, EN 1991-4:2006 5.2.1.4 (filling) and 5.2.2.4
- * (discharge), as we recall it (from memory, not confirmed against the text):
+ * circular bin in action assessment class 2, EN 1991-4:2006 5.2.3 (filling and
+ * discharge), as we recall it (from memory, not confirmed against the text):
  * zeta = 0.5 + 0.01 (d_c / t), at least 1.0, t the wall thickness. The filling pressures become
  * p_hf,u = (1 + zeta C_pf) p_hf and p_wf,u = (1 + zeta C_pf) p_wf; at discharge
  * p_he,u = (1 + zeta C_pe) p_he and p_we,u = (1 + zeta C_pe) p_we.

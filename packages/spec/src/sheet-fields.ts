@@ -54,7 +54,7 @@ export const fieldNotes: Record<string, FieldNote> = {
   'bin.fillingEccentricity': { unit: 'm', note: 'Eccentricity of the filling point from the bin axis.' },
   'bin.outletEccentricity': { unit: 'm', note: 'Eccentricity of the outlet from the bin axis.' },
   'bin.eccentricityAngle': { unit: degrees, note: 'Direction of the eccentricities, from +X counter-clockwise seen from above.' },
-  'bin.patchLoadMethod': { unit: '', note: 'Unsymmetrical solid loads: patch loads, or (action assessment class 2 only) the substitute uniform pressure increase of EN 1991-4 5.2.1.4 / 5.2.2.4 (its expressions are from memory, not yet confirmed).' },
+  'bin.patchLoadMethod': { unit: '', note: 'Unsymmetrical solid loads: patch loads, or (action assessment class 2 only) the substitute uniform pressure increase of EN 1991-4 5.2.3 (its expressions are from memory, not yet confirmed).' },
   'bin.actionAssessmentClass': { unit: '', note: 'Action assessment class (EN 1991-4 2.5); may raise, never lower, the class of Table 2.1 (a large outlet eccentricity needs class 3 for the flow-channel cases).', defaultText: 'from Table 2.1' },
   'bin.wallThickness': { unit: 'mm', note: 'Cylinder plate thickness.' },
   'bin.hopper.kind': { unit: '', note: 'cone (circular bin), pyramid (four sloping faces) or wedge (two faces sloping toward a slot along X, vertical end walls) for a rectangular bin.', defaultText: 'cone, or pyramid for a rectangular bin' },

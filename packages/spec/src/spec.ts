@@ -18,7 +18,7 @@ export interface CircularBinSpec {
   topSurface: 'level' | 'pile';
   fillingEccentricity: number;
   outletEccentricity: number;
-  /** Patch loads (EN 1991-4 5.2.1.2, 5.2.2.2) or, in action assessment class 2 only, the substitute uniform increase (5.2.1.4, 5.2.2.4). */
+  /** Patch loads (EN 1991-4 5.2.1.2, 5.2.2.2) or, in action assessment class 2 only, the substitute uniform increase (5.2.3). */
   patchLoadMethod: 'patch' | 'uniform-increase';
   /** Action assessment class set by the engineer (EN 1991-4 2.5): may raise, never lower, the class of Table 2.1. */
   actionAssessmentClass?: 1 | 2 | 3;
