@@ -72,9 +72,16 @@ function pressureSet(gamma: number, coneHeight: number, pvft: number, F: number,
   };
 }
 
-export function hopperPressures(params: HopperParameters): HopperPressures {
+/**
+ * The hopper pressures with the shape coefficient S of EN 1991-4 6.3: 2 for a cone or a pyramid
+ * (default), 1 for a wedge (plane flow). For a wedge, `radius` and `outletRadius` are the half widths
+ * across the slot. The "- 2" in the steep n is the standard's form as we have it (from memory): slice
+ * equilibrium of a wedge (plan area growing as x, not x^2) gives S (F mu_h cot(beta) + F) - S, so with
+ * S = 1 these pressures do not satisfy the statics of the solid (see `hopperWallVerticalForce`).
+ */
+export function hopperPressures(params: HopperParameters, shapeFactor = 2): HopperPressures {
   const { unitWeight: gamma, lateralPressureRatio: K, wallFrictionCoefficient: mu, internalFrictionAngle: phiI, apexHalfAngle: beta, radius, outletRadius, transitionStress: pvft } = params;
-  const S = 2;
+  const S = shapeFactor;
   const b = HOPPER_ROUGHNESS_B;
   const tanB = Math.tan(beta);
   const cotB = 1 / tanB;

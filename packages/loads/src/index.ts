@@ -43,7 +43,7 @@ export type { ActionKind, DerivationStep, Harmonic, LoadCombination, LoadSet, Pr
 export { emptySeismicCaseName } from './rectangular.js';
 export type { EdgeName, HopperFaceClass, PlanEquipmentLoad, PyramidHopper, RectangularHopper, RectangularLoadCase, RectangularPressureProfile, WedgeHopper } from './rectangular-types.js';
 export { faceLoadShape, outletLengths, rectangularHopperGeometry, type HopperFace, type RectangularHopperGeometry } from './rectangular-geometry.js';
-export { hopperWallVerticalForce, rectangularHopperPressures, shapedHopperPressures, type FacePairPressures, type HopperSolid } from './rectangular-hopper.js';
+export { hopperWallVerticalForce, rectangularHopperPressures, type FacePairPressures, type HopperSolid } from './rectangular-hopper.js';
 export { bendingLineLoad, edgeDirection, edgeLength, edgePoint, shearFlowLineLoad, tubeProperties, type TubeProperties } from './rectangular-transfer.js';
 export { isNormalToWalls, rectangularEffectiveSlenderness, rectangularSectionForceCoefficient } from './rectangular-wind.js';
 export { cosineSeriesZoneErrors, evenCosineSeries, fitCosineSeries, flowChannelEccentricity, flowChannelEtaRange, flowChannelGeometry, flowChannelPressures, flowChannelZones, seriesFirstMoment, seriesIntegral, FLOW_CHANNEL_RADIUS_RATIOS, type FlowChannelGeometry, type FlowChannelPressureParameters, type FlowChannelPressures, type FlowChannelState, type SeriesFit, type WallZone, type WallZoneName } from './flow-channel.js';

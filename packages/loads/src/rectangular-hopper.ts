@@ -1,5 +1,4 @@
-import { LoadsError } from './errors.js';
-import { hopperPressures, type HopperParameters, type HopperPressures, type HopperPressureSet, type HopperState } from './hopper.js';
+import { hopperPressures, type HopperParameters, type HopperPressures } from './hopper.js';
 import type { HopperFace, RectangularHopperGeometry } from './rectangular-geometry.js';
 
 /**
@@ -7,67 +6,10 @@ import type { HopperFace, RectangularHopperGeometry } from './rectangular-geomet
  * steep/shallow test (6.1) seen). The standard's expressions carry a shape coefficient S: 2 for a
  * cone or a pyramid, 1 for a wedge (plane flow). A pyramid uses hopperPressures (S = 2) of the
  * circular bin, once per pair of opposite faces with that pair's slope beta from the vertical (a
- * rectangular pyramid has two); a wedge uses the same expressions with S = 1 (below), for its two
+ * rectangular pyramid has two); a wedge uses the same expressions with S = 1, for its two
  * sloping faces. In both, x is measured up from the apex of the full hopper: for a face pair whose
  * side across is B at the transition and B_o at the outlet, h_h = (B/2)/tan(beta) and x_o = (B_o/2)/tan(beta).
  */
-
-const HOPPER_ROUGHNESS_B = 0.2; // b of EN 1991-4 6.3.2 (6.20), empirical, from memory
-
-function shapedSet(gamma: number, coneHeight: number, pvft: number, F: number, mu: number, n: number): HopperPressureSet {
-  return {
-    F,
-    mu,
-    n,
-    at(x: number): HopperState {
-      const xi = x / coneHeight;
-      // EN 1991-4 (6.6); n = 1 is the limit of (xi - xi^n)/(n - 1) = -xi ln(xi).
-      const part = Math.abs(n - 1) < 1e-9 ? -xi * Math.log(xi) : (xi - Math.pow(xi, n)) / (n - 1);
-      const pv = gamma * coneHeight * part + pvft * Math.pow(xi, n);
-      return { x, pv, pn: F * pv, pt: mu * F * pv };
-    },
-  };
-}
-
-/**
- * The hopper expressions of EN 1991-4 6.3 with the shape coefficient S as a parameter (hopper.ts fixes
- * S = 2): steep filling F_f = 1 - b/(1 + tan(beta)/mu_h), n = S (F mu_h cot(beta) + F) - 2 (6.19)-(6.21);
- * steep discharge F_e = (1 + sin(phi_i) cos(eps))/(1 - sin(phi_i) cos(2 beta + eps)),
- * eps = phi_wh + asin(sin(phi_wh)/sin(phi_i)) (6.22)-(6.25); shallow mu_heff = (1 - K)/(2 tan(beta)),
- * n = S (1 - b) mu_heff cot(beta), F_f = 1 - b/(1 + tan(beta)/mu_heff), discharge = filling (6.26)-(6.28).
- * The "- 2" is the standard's form as we have it (from memory): slice equilibrium of a wedge (plan
- * area growing as x, not x^2) gives S (F mu_h cot(beta) + F) - S instead, so with S = 1 the
- * standard's pressures do not satisfy the statics of the solid; see `hopperWallVerticalForce`.
- */
-export function shapedHopperPressures(params: HopperParameters, shapeFactor: number): HopperPressures {
-  const { unitWeight: gamma, lateralPressureRatio: K, wallFrictionCoefficient: mu, internalFrictionAngle: phiI, apexHalfAngle: beta, radius, outletRadius, transitionStress: pvft } = params;
-  const S = shapeFactor;
-  const b = HOPPER_ROUGHNESS_B;
-  const tanB = Math.tan(beta);
-  const cotB = 1 / tanB;
-  const coneHeight = radius / tanB;
-  const outletHeight = outletRadius / tanB;
-  const steepLimit = (1 - K) / (2 * mu);
-  const phiWh = Math.atan(mu);
-  if (tanB >= steepLimit) {
-    const muEff = (1 - K) / (2 * tanB);
-    const F = 1 - b / (1 + tanB / muEff);
-    const set = shapedSet(gamma, coneHeight, pvft, F, muEff, S * (1 - b) * muEff * cotB);
-    return { kind: 'shallow', steepLimit, coneHeight, outletHeight, filling: set, discharge: set, dischargeExpression: 'filling', dischargeDetail: { eps: Number.NaN, phiWh } };
-  }
-  const Ff = 1 - b / (1 + tanB / mu);
-  const filling = shapedSet(gamma, coneHeight, pvft, Ff, mu, S * (Ff * mu * cotB + Ff) - 2);
-  if (!(phiI > 0)) {
-    throw new LoadsError('BAD_INPUT', 'solid.internalFrictionAngle', 'solid.internalFrictionAngle must be between 0 and 90 degrees for the hopper discharge pressures (EN 1991-4 6.3.2); got none');
-  }
-  if (Math.sin(phiWh) >= Math.sin(phiI)) {
-    return { kind: 'steep', steepLimit, coneHeight, outletHeight, filling, discharge: filling, dischargeExpression: 'filling', dischargeDetail: { eps: Number.NaN, phiWh } };
-  }
-  const eps = phiWh + Math.asin(Math.sin(phiWh) / Math.sin(phiI));
-  const Fe = (1 + Math.sin(phiI) * Math.cos(eps)) / (1 - Math.sin(phiI) * Math.cos(2 * beta + eps));
-  const discharge = shapedSet(gamma, coneHeight, pvft, Fe, mu, S * (Fe * mu * cotB + Fe) - 2);
-  return { kind: 'steep', steepLimit, coneHeight, outletHeight, filling, discharge, dischargeExpression: 'mass-flow', dischargeDetail: { eps, phiWh } };
-}
 
 /** The pressures of one pair of opposite sloping faces, and the faces they belong to. */
 export interface FacePairPressures {
@@ -101,7 +43,7 @@ export function rectangularHopperPressures(geometry: RectangularHopperGeometry, 
     const slope = Math.atan(faces[0]?.tanSlope ?? Number.NaN);
     const params: HopperParameters = { ...solid, apexHalfAngle: slope, radius: across / 2, outletRadius: outletAcross / 2 };
     const shapeFactor = kind === 'wedge' ? 1 : 2;
-    return { faces, slope, shapeFactor, pressures: kind === 'wedge' ? shapedHopperPressures(params, 1) : hopperPressures(params) };
+    return { faces, slope, shapeFactor, pressures: hopperPressures(params, kind === 'wedge' ? 1 : 2) };
   });
 }
 
