@@ -60,6 +60,11 @@ describe('circular bin loads on the support line', () => {
   it('rejects a retaining silo with the input path and the limit', () => {
     expect(() => circularBinLoads(input({ fillHeight: 2 }))).toThrowError(/bin.fillHeight \/ bin.diameter = 0.333: retaining silos/);
   });
+
+  it('rejects a solid whose upper characteristic K_u = a_K K_m is not below 1 (physical bound, EN 1991-4 3.3), naming the field', () => {
+    const base = input();
+    expect(() => circularBinLoads({ ...base, solid: { ...base.solid, lateralPressureRatio: 0.95 } })).toThrowError('solid.lateralPressureRatio x solid.lateralPressureRatioFactor (the upper characteristic K_u = a_K K_m, EN 1991-4 3.3) must be less than 1 (dimensionless); got 1.0545');
+  });
 });
 
 describe('squat and intermediate filling (EN 1991-4 5.3.1.1)', () => {

@@ -12,7 +12,7 @@ import { slendernessClass, type SlendernessClass } from './slenderness.js';
 import { squatProfile } from './squat.js';
 import { topSurface } from './surface.js';
 import type { DerivationStep, Harmonic, LoadSet, PressureProfile, SupportLineCase } from './types.js';
-import { requireAngle, requireRange } from './validate.js';
+import { requireAngle, requireRange, validateStoredSolid } from './validate.js';
 import { dischargeFactors, patchFactors, patchHeight, thinWalledPatchForce, uniformIncreaseFactor, uniformIncreaseZeta } from './wall.js';
 
 export const STANDARD_GRAVITY = 9.80665; // m/s2
@@ -137,15 +137,7 @@ function validate(input: CircularBinLoadInput): void {
   }
   requireRange('bin.fillingEccentricity', bin.fillingEccentricity ?? 0, 0, bin.diameter / 2, 'm (inside the bin radius)', { strictUpper: true });
   requireRange('bin.outletEccentricity', bin.outletEccentricity ?? 0, 0, bin.diameter / 2, 'm (inside the bin radius)', { strictUpper: true });
-  requireRange('solid.unitWeight', solid.unitWeight, 1000, 30000, 'N/m3');
-  requireRange('solid.lateralPressureRatio', solid.lateralPressureRatio, 0, 1, '(dimensionless)', { strictLower: true, strictUpper: true });
-  requireRange('solid.lateralPressureRatioFactor', solid.lateralPressureRatioFactor, 1, 2, '(dimensionless)');
-  requireRange('solid.wallFrictionCoefficient', solid.wallFrictionCoefficient, 0, 1.5, '(dimensionless)', { strictLower: true, strictUpper: true });
-  requireRange('solid.wallFrictionFactor', solid.wallFrictionFactor, 1, 2, '(dimensionless)');
-  requireAngle('solid.angleOfRepose', solid.angleOfRepose, 0, 90, { strictLower: true, strictUpper: true });
-  requireAngle('solid.internalFrictionAngle', solid.internalFrictionAngle, 0, 90, { strictLower: true, strictUpper: true });
-  requireRange('solid.internalFrictionFactor', solid.internalFrictionFactor, 1, 2, '(dimensionless)');
-  requireRange('solid.patchLoadFactor', solid.patchLoadFactor, 0, 2, '(dimensionless)');
+  validateStoredSolid(solid);
   const roofRadius = bin.diameter / 2 + bin.wallThickness;
   if (input.roof) {
     requireRange('roof.deadLoad', input.roof.deadLoad, 0, 50e3, 'Pa');

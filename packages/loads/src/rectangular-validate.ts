@@ -2,7 +2,7 @@ import { LoadsError } from './errors.js';
 import { outletLengths } from './rectangular-geometry.js';
 import type { RectangularBinLoadInput } from './rectangular-types.js';
 import { isNormalToWalls } from './rectangular-wind.js';
-import { requireAngle, requireRange } from './validate.js';
+import { requireAngle, requireRange, validateStoredSolid } from './validate.js';
 
 const DEG = Math.PI / 180;
 /** Slopes of a hopper face from the vertical that EN 1991-4 6 treats as a hopper (as for the circular bin's apex half-angle). */
@@ -62,25 +62,7 @@ export function validateRectangularInput(input: RectangularBinLoadInput): void {
     throw new LoadsError('BAD_INPUT', 'bin.actionAssessmentClass', `bin.actionAssessmentClass must be 1, 2 or 3 (EN 1991-4 2.5); got ${String(bin.actionAssessmentClass)}`);
   }
 
-  requireRange('solid.unitWeight', solid.unitWeight, 1000, 30000, 'N/m3');
-  requireRange('solid.lateralPressureRatio', solid.lateralPressureRatio, 0, 1, '(dimensionless)', { strictLower: true, strictUpper: true });
-  requireRange('solid.lateralPressureRatioFactor', solid.lateralPressureRatioFactor, 1, 2, '(dimensionless)');
-  requireRange('solid.wallFrictionCoefficient', solid.wallFrictionCoefficient, 0, 1.5, '(dimensionless)', { strictLower: true, strictUpper: true });
-  requireRange('solid.wallFrictionFactor', solid.wallFrictionFactor, 1, 2, '(dimensionless)');
-  requireAngle('solid.angleOfRepose', solid.angleOfRepose, 0, 90, { strictLower: true, strictUpper: true });
-  requireAngle('solid.internalFrictionAngle', solid.internalFrictionAngle, 0, 90, { strictLower: true, strictUpper: true });
-  requireRange('solid.internalFrictionFactor', solid.internalFrictionFactor, 1, 2, '(dimensionless)');
-  requireRange('solid.patchLoadFactor', solid.patchLoadFactor, 0, 2, '(dimensionless)');
-  // The upper characteristic values must stay physical: K_u = a_K K_m < 1 (a lateral pressure ratio
-  // of 1 or more is a fluid or worse), phi_i,u = a_phi phi_im < 90 degrees.
-  const Ku = solid.lateralPressureRatio * solid.lateralPressureRatioFactor;
-  if (!(Ku < 1)) {
-    throw new LoadsError('BAD_INPUT', 'solid.lateralPressureRatioFactor', `solid.lateralPressureRatio x solid.lateralPressureRatioFactor (the upper characteristic K_u = a_K K_m, EN 1991-4 3.3) must be less than 1 (dimensionless); got ${Number(Ku.toFixed(4))}`);
-  }
-  const phiU = (solid.internalFrictionAngle * solid.internalFrictionFactor) / DEG;
-  if (!(phiU < 90)) {
-    throw new LoadsError('BAD_INPUT', 'solid.internalFrictionFactor', `solid.internalFrictionAngle x solid.internalFrictionFactor (the upper characteristic phi_i,u = a_phi phi_im, EN 1991-4 3.3) must be less than 90 degrees; got ${Number(phiU.toFixed(4))}`);
-  }
+  validateStoredSolid(solid);
 
   if (input.roof) {
     requireRange('roof.deadLoad', input.roof.deadLoad, 0, 50e3, 'Pa');
