@@ -162,7 +162,8 @@ export async function designOption(option: OptionCase): Promise<CompareRow> {
   const spec = prepared.spec;
   let result;
   try {
-    result = (await designFromSpec(spec)).result;
+    // The row shows the chosen design; the scenarios outside the envelope do not change it.
+    result = (await designFromSpec(spec, { comparisonScenarios: false })).result;
   } catch (error) {
     return errorRow(option, prepared.overrides, error instanceof DesignError && error.code === 'BAD_INPUT' ? 'invalid' : 'failed', error);
   }

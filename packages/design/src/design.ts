@@ -2,7 +2,7 @@ import { analyseAll, GirderError, type AnalysisResult, type GirderModel, type Se
 import { circularBinGeometry, circularBinLoads, LoadsError, PERMANENT_CASE, SOLID_FILLING_CASE, STANDARD_GRAVITY, type LoadSet } from '@binsupport/loads';
 import { solveSelection, tieTolerance, type SelectionCandidate, type SelectionGroup, type SelectionProblem } from '@binsupport/optimiser';
 import type { BinSpec, CircularBinSpec } from '@binsupport/spec';
-import { generateWeldedBoxes, generateWeldedSections, loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
+import { checkFlexuralBuckling, generateWeldedBoxes, generateWeldedSections, loadRolledSections, rolledSection, SteelError, steelGrade, type SteelGrade, type SteelSection } from '@binsupport/steel';
 import { DesignError } from './errors.js';
 import { envelopeChecks, governingEnvelope, maxStationUtilisation, maxUtilisation, type CheckEnvelope, type StationSet } from './evaluate.js';
 import { buildRingModel, columnId, nodeAngle, type RingLayout } from './ring.js';
@@ -41,6 +41,8 @@ export interface DesignOptions {
    * support.columnSection in the girder model, as the brute-force tests compare against).
    */
   columnStiffnessRounds?: number;
+  /** Analyse and report the support scenarios outside the design envelope beside it (default true; the option comparison sets false). */
+  comparisonScenarios?: boolean;
   /** At most this many distinct (section, grade) pairs over the girder and the columns (default: no cap). */
   maxDistinctSections?: number;
   /** Rolled series of the column candidates of a ring on columns (default ['HE B']). */
@@ -193,7 +195,17 @@ function selectionSetup(context: DesignContext, options: DesignOptions, girderLe
     return best;
   };
   const minPrice = Math.min(...grades.map(price));
-  const lightestColumn = columnCandidates[0];
+  // A lower bound on the columns of any choice: the columns' reactions add up to at least the
+  // factored vertical load of the support line (the girder's own weight adds to it), so in the worst
+  // sizing combination some column carries at least the mean, sum / n. A column that fails flexural
+  // buckling (EN 1993-1-1 6.3.1, the column's own check) under that compression alone, in the
+  // strongest grade offered, is never chosen: the lightest that passes bounds the column cost.
+  const sizing = sizingCombinations(context.loads);
+  const meanCompression = hasColumns
+    ? Math.max(0, ...context.loads.combinations.filter((combination) => sizing.has(combination.name)).map((combination) => context.loads.cases.reduce((sum, loadCase) => sum + (combination.factors[loadCase.name] ?? 0) * loadCase.verticalResultant, 0))) / layout.columns
+    : 0;
+  const strongestGrade = [...grades].sort((a, b) => (b.strengths[0]?.yieldStrength ?? 0) - (a.strengths[0]?.yieldStrength ?? 0))[0];
+  const lightestColumn = strongestGrade ? (columnCandidates.find((column) => checkFlexuralBuckling(column, strongestGrade, -meanCompression, { length: spec.support.columnHeight, ends: 'pinned-pinned' }).utilisation <= 1) ?? columnCandidates[0]) : columnCandidates[0];
   return {
     grades,
     columnCandidates,
@@ -679,41 +691,63 @@ const MAX_COLUMN_ROUNDS = 4;
  */
 export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}): Promise<DesignOutcome> {
   circularBinOf(spec);
-  const rounds: Array<{ modelColumn: string; outcome: DesignOutcome }> = [];
-  const failedRounds: Array<{ modelColumn: string; message: string }> = [];
-  let modelColumn = spec.support.columnSection;
   const progress = explicit.progress ?? (() => undefined);
   const maxRounds = explicit.columnStiffnessRounds ?? MAX_COLUMN_ROUNDS;
   if (!Number.isInteger(maxRounds) || maxRounds < 1 || maxRounds > MAX_COLUMN_ROUNDS) {
     throw new DesignError('BAD_INPUT', `options.columnStiffnessRounds must be a whole number between 1 and ${MAX_COLUMN_ROUNDS}; got ${maxRounds}`, 'options.columnStiffnessRounds');
   }
+  const columnOf = (outcome: DesignOutcome) => outcome.result.members.find((member) => member.id === COLUMN_MEMBER_ID)?.section;
+  // The integer program's column (the one-design fallback may have kept the model's instead).
+  const chosenOf = (outcome: DesignOutcome) => outcome.result.optimisation.columnStiffness?.chosenColumn ?? columnOf(outcome);
+  const withModelColumn = (modelColumn: string): BinSpec => (modelColumn === spec.support.columnSection ? spec : { ...spec, support: { ...spec.support, columnSection: modelColumn } });
+  type Round = { modelColumn: string; outcome: DesignOutcome } | { modelColumn: string; provisional: ProvisionalRound['provisional'] } | { modelColumn: string; failed: string };
+  const rounds: Round[] = [];
+  let modelColumn = spec.support.columnSection;
+  let startGirder: string | undefined;
+  let settled: DesignOutcome | undefined;
   for (let round = 1; round <= maxRounds; round++) {
-    const roundSpec: BinSpec = modelColumn === spec.support.columnSection ? spec : { ...spec, support: { ...spec.support, columnSection: modelColumn } };
-    let outcome: DesignOutcome;
+    // Rounds are provisional while another may follow: a round that keeps its model's column is finished in full.
+    const provisional = round < maxRounds;
+    let result: DesignOutcome | ProvisionalRound;
     try {
-      outcome = await designWithModelColumn(roundSpec, explicit);
+      result = await designWithModelColumn(withModelColumn(modelColumn), explicit, { provisional, ...(startGirder !== undefined ? { startGirder } : {}) });
     } catch (error) {
       // A later round that cannot be designed (a guard, a lift-off) leaves the earlier rounds standing.
       if (round === 1 || !(error instanceof DesignError)) throw error;
       progress(`column stiffness: with ${modelColumn} in the girder model the design stops (${error.message}); keeping the earlier rounds`);
-      failedRounds.push({ modelColumn, message: error.message });
+      rounds.push({ modelColumn, failed: error.message });
       break;
     }
-    rounds.push({ modelColumn, outcome });
-    // The integer program's column (the one-design fallback may have kept the model's instead).
-    const chosen = outcome.result.optimisation.columnStiffness?.chosenColumn ?? outcome.result.members.find((member) => member.id === COLUMN_MEMBER_ID)?.section;
-    if (chosen === undefined || chosen === modelColumn) break;
-    if (rounds.some((entry) => entry.modelColumn === chosen)) {
-      progress(`column stiffness: the chosen ${chosen} columns were already the model's in an earlier round (cycle)`);
-      break;
+    if ('provisional' in result) {
+      rounds.push({ modelColumn, provisional: result.provisional });
+      const chosen = result.provisional.chosenColumn;
+      if (rounds.some((entry) => entry.modelColumn === chosen)) {
+        progress(`column stiffness: the chosen ${chosen} columns were already the model's in an earlier round (cycle)`);
+        break;
+      }
+      progress(`column stiffness: the design chose ${chosen} columns, not the model's ${modelColumn}; designing again with ${chosen} in the girder model`);
+      modelColumn = chosen;
+      startGirder = result.provisional.girder;
+      continue;
     }
-    if (round < maxRounds) progress(`column stiffness: the design chose ${chosen} columns, not the model's ${modelColumn}; designing again with ${chosen} in the girder model`);
-    modelColumn = chosen;
+    // A finished round ends the iteration: it kept its model's column (settled), or it was the last allowed.
+    rounds.push({ modelColumn, outcome: result });
+    const chosen = chosenOf(result);
+    if (chosen === undefined || chosen === modelColumn) settled = result;
+    break;
   }
-  if (rounds.length === 1 && failedRounds.length === 0) return (rounds[0] as { outcome: DesignOutcome }).outcome;
-  const columnOf = (outcome: DesignOutcome) => outcome.result.members.find((member) => member.id === COLUMN_MEMBER_ID)?.section;
-  const chosenOf = (outcome: DesignOutcome) => outcome.result.optimisation.columnStiffness?.chosenColumn ?? columnOf(outcome);
-  const verified = rounds.filter((entry) => entry.outcome.result.status === 'verified');
+  if (rounds.length === 1 && rounds[0] && 'outcome' in rounds[0]) return rounds[0].outcome;
+  // Without a settled round (a cycle, the round limit, a failure), every provisional round is
+  // finished in full and the old rule picks: the least-cost round verified with the stiffness it has.
+  const finished: Array<{ modelColumn: string; outcome: DesignOutcome }> = [];
+  for (const entry of rounds) {
+    if ('outcome' in entry) finished.push(entry);
+    else if ('provisional' in entry && !settled) {
+      const outcome = await designWithModelColumn(withModelColumn(entry.modelColumn), explicit);
+      if (!('provisional' in outcome)) finished.push({ modelColumn: entry.modelColumn, outcome });
+    }
+  }
+  const verified = finished.filter((entry) => entry.outcome.result.status === 'verified');
   // A fixed point: the integer program chose the model's own column.
   const consistent = verified.filter((entry) => chosenOf(entry.outcome) === entry.modelColumn);
   // Verified with the stiffness it has: the model's column kept, or the chosen pair passed its re-analysis.
@@ -721,19 +755,18 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
     const stiffness = entry.outcome.result.optimisation.columnStiffness;
     return stiffness === undefined || stiffness.kept === stiffness.modelColumn || ((stiffness.girderUtilisation ?? Infinity) <= 1 && (stiffness.columnUtilisation ?? Infinity) <= 1);
   });
-  const cheapest = (list: typeof rounds) => [...list].sort((a, b) => (a.outcome.result.optimisation.objectiveValue ?? Infinity) - (b.outcome.result.optimisation.objectiveValue ?? Infinity))[0];
-  const pick = cheapest(consistent) ?? cheapest(confirmed) ?? (rounds[rounds.length - 1] as (typeof rounds)[number]);
-  const columnRounds: NonNullable<DesignResult['optimisation']['columnRounds']> = [
-    ...rounds.map((entry) => ({
-      modelColumn: entry.modelColumn,
-      chosenColumn: chosenOf(entry.outcome) ?? null,
-      column: columnOf(entry.outcome) ?? null,
-      status: entry.outcome.result.status,
-      objectiveValue: entry.outcome.result.optimisation.objectiveValue ?? null,
-      steelMass: entry.outcome.result.totals.steelMass,
-    })),
-    ...failedRounds.map((entry) => ({ modelColumn: entry.modelColumn, chosenColumn: null, column: null, status: 'failed' as const, objectiveValue: null, steelMass: null, message: entry.message })),
-  ];
+  const cheapest = (list: typeof finished) => [...list].sort((a, b) => (a.outcome.result.optimisation.objectiveValue ?? Infinity) - (b.outcome.result.optimisation.objectiveValue ?? Infinity))[0];
+  const pick = cheapest(consistent) ?? cheapest(confirmed) ?? finished[finished.length - 1];
+  if (!pick) throw new DesignError('ANALYSIS_FAILED', 'the column-stiffness iteration finished no round');
+  const columnRounds: NonNullable<DesignResult['optimisation']['columnRounds']> = rounds.map((entry) => {
+    if ('failed' in entry) return { modelColumn: entry.modelColumn, chosenColumn: null, column: null, status: 'failed' as const, objectiveValue: null, steelMass: null, message: entry.failed };
+    const outcome = 'outcome' in entry ? entry.outcome : finished.find((candidate) => candidate.modelColumn === entry.modelColumn)?.outcome;
+    if (outcome) {
+      return { modelColumn: entry.modelColumn, chosenColumn: chosenOf(outcome) ?? null, column: columnOf(outcome) ?? null, status: outcome.result.status, objectiveValue: outcome.result.optimisation.objectiveValue ?? null, steelMass: outcome.result.totals.steelMass };
+    }
+    const provisional = (entry as { provisional: ProvisionalRound['provisional'] }).provisional;
+    return { modelColumn: entry.modelColumn, chosenColumn: provisional.chosenColumn, column: provisional.chosenColumn, status: 'superseded' as const, objectiveValue: provisional.objectiveValue, steelMass: provisional.steelMass };
+  });
   const { result } = pick.outcome;
   const note = `; the column stiffness was iterated over ${columnRounds.length} designs (${columnRounds.map((entry) => (entry.status === 'failed' ? `${entry.modelColumn} in the model: not designed` : `${entry.modelColumn} in the model, ${entry.chosenColumn ?? 'none'} chosen`)).join('; ')}); this design has ${pick.modelColumn} in the girder model`;
   return {
@@ -742,7 +775,19 @@ export async function designFromSpec(spec: BinSpec, explicit: DesignOptions = {}
   };
 }
 
-async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Promise<DesignOutcome> {
+/** A round of the column iteration that chose another column than its model's: what the next round needs and the report lists. */
+interface ProvisionalRound {
+  provisional: { girder: string; chosenColumn: string; objectiveValue: number; steelMass: number };
+}
+
+interface RoundOptions {
+  /** Skip the finishing work when the chosen column is not the model's (the round will be superseded). */
+  provisional?: boolean;
+  /** The girder designation the sizing loop starts from (default: the heaviest candidate). */
+  startGirder?: string;
+}
+
+async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions, internal: RoundOptions = {}): Promise<DesignOutcome | ProvisionalRound> {
   const options: DesignOptions = { ...optionsFromSpec(spec), ...explicit };
   const progress = options.progress ?? (() => undefined);
   const maxIterations = options.maxIterations ?? 8;
@@ -759,7 +804,9 @@ async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Pr
   if (candidates.length === 0) throw new DesignError('BAD_INPUT', 'no candidate sections in the chosen families', 'support.sectionFamilies');
 
   const credible = SCENARIOS.filter((scenario) => spec.support.credibleScenarios.includes(scenario.id));
-  const comparison = SCENARIOS.filter(
+  // The scenarios outside the envelope are analysed for the report only; an option comparison,
+  // which shows the chosen design, can leave them out (the choice does not depend on them).
+  const comparison = options.comparisonScenarios === false ? [] : SCENARIOS.filter(
     (scenario) =>
       scenario.supportType === spec.support.type &&
       !spec.support.credibleScenarios.includes(scenario.id) &&
@@ -784,7 +831,9 @@ async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Pr
     }
     return entry;
   };
-  let current = candidates[candidates.length - 1] as SteelSection;
+  // A later round of the column iteration starts from the girder the previous round chose (the
+  // descent below makes the answer independent of where the loop starts).
+  let current = (internal.startGirder !== undefined ? candidates.find((section) => section.designation === internal.startGirder) : undefined) ?? (candidates[candidates.length - 1] as SteelSection);
   const steps: OptimisationStep[] = [];
   let converged = false;
   let selectionStatus: 'optimal' | 'feasible' | 'infeasible' = 'infeasible';
@@ -838,14 +887,33 @@ async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Pr
   // possible cost (its own at the cheapest grade, the lightest column, one distinct section) is below
   // the best verified design is analysed with its own section, lightest first.
   let best = await selection.bestOver([...analysed.values()]);
+  // A provisional round whose loop already chose another column than its model's is superseded
+  // before the descent: the next round, with that column in the model, makes the exact search.
+  const superseded = (): ProvisionalRound | undefined => {
+    if (!internal.provisional || !best?.column || best.column.designation === context.column.section.designation) return undefined;
+    const columnLength = layout.columns * spec.support.columnHeight;
+    return {
+      provisional: {
+        girder: best.girder.designation,
+        chosenColumn: best.column.designation,
+        objectiveValue: best.objective,
+        steelMass: best.girder.properties.massPerMetre * girderLength + bearingStiffenerMass(best.girder, spec, layout) + best.column.properties.massPerMetre * columnLength,
+      },
+    };
+  };
+  const early = superseded();
+  if (early) return early;
   const loopBest = best ? analysed.get(best.girder.designation) : undefined;
   if (best && loopBest) {
     // A section that fails under a few combinations fails under all of them, so each is first
     // analysed under the combinations that govern the loop's answer, and fully only if it passes.
     const governingCombinations = new Set([...loopBest.envelopes].sort((a, b) => b.check.utilisation - a.check.utilisation).map((envelope) => envelope.combination).slice(0, 3));
     let round = steps.length;
-    for (const section of candidates) {
-      if (selection.lowerBound(section) >= best.objective - tieTolerance(best.objective)) break;
+    // In the order of their lower bounds (a welded girder's price factor breaks the order by mass),
+    // so that the first bound at or above the best ends the search.
+    const byBound = candidates.map((section) => ({ section, bound: selection.lowerBound(section) })).sort((a, b) => a.bound - b.bound || a.section.properties.massPerMetre - b.section.properties.massPerMetre || a.section.designation.localeCompare(b.section.designation));
+    for (const { section, bound } of byBound) {
+      if (bound >= best.objective - tieTolerance(best.objective)) break;
       if (analysed.has(section.designation)) continue;
       const screened = screenSection(context, section, credible, governingCombinations, grades);
       round += 1;
@@ -879,6 +947,10 @@ async function designWithModelColumn(spec: BinSpec, explicit: DesignOptions): Pr
   const bestAttempt = [...analysed.values()].sort((a, b) => a.utilisation - b.utilisation || b.section.properties.massPerMetre - a.section.properties.massPerMetre)[0] as SectionAnalysis;
   const final = best ? (analysed.get(best.girder.designation) as SectionAnalysis) : bestAttempt;
   const finalGrade = best ? best.grade : context.grade;
+  // After the descent, the same: a round whose chosen column is not the model's is superseded by the
+  // next round; its finishing work (re-checks, reported scenarios, guards, the result) is skipped.
+  const late = superseded();
+  if (late) return late;
   const finalEnvelopes = selection.girderEnvelopes(final, finalGrade);
   let finalColumn = best ? best.column : selection.bestAttemptColumn(final, finalGrade);
   let finalColumnEnvelopes = finalColumn ? selection.columnEnvelopes(final, finalColumn, finalGrade) : [];

@@ -243,10 +243,12 @@ export interface OptimisationSummary {
    * Present when the column stiffness was iterated (the first design chose a column other than
    * support.columnSection): one entry per whole design, with the column in its girder model, the
    * column the integer program chose and the column the design kept (`column`); a round that could
-   * not be designed is `failed` with its `message`, and the earlier rounds stand. The result is the
-   * least-cost round whose chosen column is its model's.
+   * not be designed is `failed` with its `message`, and the earlier rounds stand; a round that chose
+   * another column is `superseded` (its sizing only: objective and steel of its choice). The result
+   * is the round whose chosen column is its model's, or, without one, the least-cost round verified
+   * with the stiffness it has.
    */
-  columnRounds?: Array<{ modelColumn: string; chosenColumn: string | null; column: string | null; status: 'verified' | 'infeasible' | 'failed'; objectiveValue: number | null; steelMass: number | null; message?: string }>;
+  columnRounds?: Array<{ modelColumn: string; chosenColumn: string | null; column: string | null; status: 'verified' | 'infeasible' | 'failed' | 'superseded'; objectiveValue: number | null; steelMass: number | null; message?: string }>;
 }
 
 /** Serviceability settings and information (the checks themselves are rows of `utilisations`). */
