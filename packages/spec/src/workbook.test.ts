@@ -51,6 +51,7 @@ const kestrelSheetValues: Record<string, ExcelJS.CellValue> = {
   'support.segmentsPerSpan': 24,
   'support.grade': 'S355',
   'support.sectionFamilies': 'IPE, HEB',
+  'support.columnSection': 'HE 180 B',
 };
 
 let template: Buffer;
