@@ -1,7 +1,7 @@
 import { LoadsError, rectangularBinLoads, type LoadSet, type RectangularBin, type RectangularLoadSet } from '@binsupport/loads';
 import type { BinSpec, RectangularBinSpec } from '@binsupport/spec';
 import { listSections, sectionFamilies, SteelError, type SectionFamily, type SectionListing } from '@binsupport/steel';
-import { loadsFor } from './design.js';
+import { commonActions, loadsFor } from './design.js';
 import { DesignError } from './errors.js';
 
 export const LOADS_SCHEMA_VERSION = '1.0.0';
@@ -76,12 +76,7 @@ function rectangularLoadsFor(spec: BinSpec, bin: RectangularBinSpec): Rectangula
   try {
     return rectangularBinLoads({
       bin: { lengthX: bin.lengthX, lengthY: bin.lengthY, cylinderHeight: bin.cylinderHeight, fillHeight: bin.fillHeight, wallThickness: bin.wallThickness, steelDensity: bin.steelDensity, topSurface: bin.topSurface, hopper, ...(bin.actionAssessmentClass !== undefined ? { actionAssessmentClass: bin.actionAssessmentClass } : {}) },
-      solid: spec.solid,
-      partialFactors: { permanentFactor: spec.actions.permanentFactor, solidFactor: spec.actions.solidFactor, variableFactor: spec.actions.variableFactor, method: spec.actions.combinationMethod },
-      ...(spec.roof ? { roof: spec.roof } : {}),
-      ...(spec.snow ? { snow: spec.snow } : {}),
-      ...(spec.wind ? { wind: spec.wind } : {}),
-      ...(spec.seismic ? { seismic: spec.seismic } : {}),
+      ...commonActions(spec),
       ...(spec.equipment.length > 0
         ? { equipment: spec.equipment.map((item) => ({ name: item.name, x: bin.lengthX / 2 + item.radius * Math.cos(item.angle), y: bin.lengthY / 2 + item.radius * Math.sin(item.angle), force: item.force, kind: item.kind })) }
         : {}),

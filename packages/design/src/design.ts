@@ -348,17 +348,24 @@ export function circularBinOf(spec: BinSpec): CircularBinSpec {
   return spec.bin;
 }
 
+/** The actions of a spec that both bin shapes take alike: the solid, the partial factors, roof, snow, wind and seismic. */
+export function commonActions(spec: BinSpec) {
+  return {
+    solid: spec.solid,
+    partialFactors: { permanentFactor: spec.actions.permanentFactor, solidFactor: spec.actions.solidFactor, variableFactor: spec.actions.variableFactor, method: spec.actions.combinationMethod },
+    ...(spec.roof ? { roof: spec.roof } : {}),
+    ...(spec.snow ? { snow: spec.snow } : {}),
+    ...(spec.wind ? { wind: spec.wind } : {}),
+    ...(spec.seismic ? { seismic: spec.seismic } : {}),
+  };
+}
+
 export function loadsFor(spec: BinSpec): LoadSet {
   const bin = circularBinOf(spec);
   try {
     return circularBinLoads({
       bin,
-      solid: spec.solid,
-      partialFactors: { permanentFactor: spec.actions.permanentFactor, solidFactor: spec.actions.solidFactor, variableFactor: spec.actions.variableFactor, method: spec.actions.combinationMethod },
-      ...(spec.roof ? { roof: spec.roof } : {}),
-      ...(spec.snow ? { snow: spec.snow } : {}),
-      ...(spec.wind ? { wind: spec.wind } : {}),
-      ...(spec.seismic ? { seismic: spec.seismic } : {}),
+      ...commonActions(spec),
       ...(spec.equipment.length > 0 ? { equipment: spec.equipment } : {}),
     });
   } catch (error) {

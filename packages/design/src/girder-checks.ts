@@ -375,12 +375,6 @@ function capBoltChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, 
   if (!bolts || !boltLayout) return;
   const strengths = strengthsForThickness(grade, section.dimensions.flangeThickness);
   const points = bearingPoints(item.model, item.analysis);
-  if (section.box) {
-    // The T-stub with the web as its stem is an I's; a box has no web on its centre line.
-    const station = item.analysis.stations[0];
-    keepWorst(worst, { id: 'cap-bolts', title: 'Cap bolts and bolted flange in tension (T-stub)', clause: 'EN 1993-1-8 6.2.4', utilisation: Number.POSITIVE_INFINITY, inputs: {}, intermediate: {}, outOfScope: 'cap bolts on a box girder are not covered (the T-stub model needs a web on the bolt line\'s side)' }, item.analysis.combination, item.scenario, station);
-    return;
-  }
   for (let j = 0; j < layout.columns; j++) {
     const group = capGroupId(j);
     for (const side of [-1, 1]) {
@@ -396,6 +390,7 @@ function capBoltChecks(section: SteelSection, grade: SteelGrade, spec: BinSpec, 
         flangeThickness: section.dimensions.flangeThickness,
         webThickness: section.dimensions.webThickness,
         rootRadius: section.dimensions.rootRadius,
+        ...(section.box ? { webCentreDistance: section.box.webCentreDistance } : {}),
         flangeYieldStrength: strengths.yieldStrength,
         flangeUltimateStrength: strengths.ultimateStrength,
         gammaM0: grade.gammaM0,

@@ -48,20 +48,23 @@ export function capBoltLayout(girder: SteelSection, spec: BinSpec): { gauge: num
 }
 
 function capPlate(behaviour: 'compression-only' | 'bilateral', bolted = false) {
-  return (girder: SteelSection, column: { axialStiffness: number }, spec: BinSpec, grade: SteelGrade): ColumnSupport => ({
-    kind: 'cap-plate',
-    behaviour,
-    points: spec.support.bearingPoints,
-    capLength: spec.support.capPlateLength,
-    columnAxialStiffness: column.axialStiffness,
-    flangeWidth: girder.dimensions.flangeWidth,
-    flangeThickness: girder.dimensions.flangeThickness,
-    webThickness: girder.dimensions.webThickness,
-    youngsModulus: grade.youngsModulus,
-    flangeFlexibility: spec.support.flangeFlexibility,
-    ...(girder.box ? { webCentreDistance: girder.box.webCentreDistance } : {}),
-    ...(bolted && capBoltLayout(girder, spec) ? { boltGauge: capBoltLayout(girder, spec)?.gauge as number } : {}),
-  });
+  return (girder: SteelSection, column: { axialStiffness: number }, spec: BinSpec, grade: SteelGrade): ColumnSupport => {
+    const bolts = bolted ? capBoltLayout(girder, spec) : undefined;
+    return {
+      kind: 'cap-plate',
+      behaviour,
+      points: spec.support.bearingPoints,
+      capLength: spec.support.capPlateLength,
+      columnAxialStiffness: column.axialStiffness,
+      flangeWidth: girder.dimensions.flangeWidth,
+      flangeThickness: girder.dimensions.flangeThickness,
+      webThickness: girder.dimensions.webThickness,
+      youngsModulus: grade.youngsModulus,
+      flangeFlexibility: spec.support.flangeFlexibility,
+      ...(girder.box ? { webCentreDistance: girder.box.webCentreDistance } : {}),
+      ...(bolts ? { boltGauge: bolts.gauge } : {}),
+    };
+  };
 }
 
 export const SCENARIOS: ScenarioDefinition[] = [

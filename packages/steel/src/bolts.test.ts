@@ -79,5 +79,7 @@ describe('cap bolts in tension and the bolted flange as a T-stub (EN 1993-1-8)',
     const edge = checkBoltedFlangeTension({ ...input, gauge: 0.13 });
     // e = 20 mm < 1.2 d_0 = 1.2 x 22 = 26.4 mm (EN 1993-1-8 Table 3.3).
     expect(edge.outOfScope).toContain('below 1.2 d_0 = 26.4 mm');
+    // a box has two webs off its centre line: the T-stub with the web as its stem does not apply
+    expect(checkBoltedFlangeTension({ ...input, webCentreDistance: 0.2 }).outOfScope).toContain('cap bolts on a box are not covered');
   });
 });

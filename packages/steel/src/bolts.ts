@@ -56,6 +56,8 @@ export interface BoltedFlangeInput {
   webThickness: number;
   /** root radius (rolled) or 0 (welded: the weld is ignored, which is conservative) */
   rootRadius: number;
+  /** distance between the web centre lines of a box girder, m; 0 or absent for an I (one web on the centre line) */
+  webCentreDistance?: number;
   /** yield and ultimate strength of the flange, Pa */
   flangeYieldStrength: number;
   flangeUltimateStrength: number;
@@ -95,7 +97,8 @@ export function checkBoltedFlangeTension(input: BoltedFlangeInput): CheckResult 
   const inputs = { tension, bolts: nb, gauge: g, capLength, flangeWidth: b, flangeThickness: tf, webThickness: tw, rootRadius: r, boltDiameter: d, tensileStressArea: As, fub, fy: input.flangeYieldStrength, fu: input.flangeUltimateStrength };
   const base = { id: 'cap-bolts', title: 'Cap bolts and bolted flange in tension (T-stub)', clause: 'EN 1993-1-8 3.6.1 Table 3.4, 6.2.4 Table 6.2', inputs };
   const geometryProblem =
-    m < d ? `the bolt line (gauge ${(g * 1e3).toFixed(0)} mm) leaves m = ${(m * 1e3).toFixed(1)} mm to the web fillet, less than the bolt diameter ${(d * 1e3).toFixed(0)} mm`
+    (input.webCentreDistance ?? 0) > 0 ? 'a box girder has no web on its centre line, so the T-stub with the web as its stem does not apply (cap bolts on a box are not covered)'
+    : m < d ? `the bolt line (gauge ${(g * 1e3).toFixed(0)} mm) leaves m = ${(m * 1e3).toFixed(1)} mm to the web fillet, less than the bolt diameter ${(d * 1e3).toFixed(0)} mm`
     : e < 1.2 * d0 ? `the edge distance e = ${(e * 1e3).toFixed(1)} mm is below 1.2 d_0 = ${(1.2 * d0 * 1e3).toFixed(1)} mm (EN 1993-1-8 Table 3.3)`
     : nb > 1 && p < 2.2 * d0 ? `the pitch ${(p * 1e3).toFixed(1)} mm of ${nb} bolts along the cap is below 2.2 d_0 = ${(2.2 * d0 * 1e3).toFixed(1)} mm (EN 1993-1-8 Table 3.3)`
     : endDistance < 1.2 * d0 ? `the end distance ${(endDistance * 1e3).toFixed(1)} mm is below 1.2 d_0 = ${(1.2 * d0 * 1e3).toFixed(1)} mm (EN 1993-1-8 Table 3.3)`

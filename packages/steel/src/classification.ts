@@ -85,6 +85,15 @@ export function sectionYieldStrength(section: ClassifiableSection, grade: SteelG
   return strengthsForThickness(grade, Math.max(flangeThickness, webThickness)).yieldStrength;
 }
 
+/** c/t limits of an internal part in bending and compression, EN 1993-1-1 Table 5.2 (sheet 1): alpha for classes 1 and 2, psi for class 3. */
+function internalPartLimits(epsilon: number, alpha: number, psi: number): { class1: number; class2: number; class3: number } {
+  return {
+    class1: alpha > 0.5 ? (396 * epsilon) / (13 * alpha - 1) : (36 * epsilon) / alpha,
+    class2: alpha > 0.5 ? (456 * epsilon) / (13 * alpha - 1) : (41.5 * epsilon) / alpha,
+    class3: psi > -1 ? (42 * epsilon) / (0.67 + 0.33 * psi) : 62 * epsilon * (1 - psi) * Math.sqrt(-psi),
+  };
+}
+
 function classFromLimits(slenderness: number, limits: { class1: number; class2: number; class3: number }): SectionClass {
   if (slenderness <= limits.class1) return 1;
   if (slenderness <= limits.class2) return 2;
@@ -143,12 +152,7 @@ function webUnderAxialAndBending(
     return { alpha, psi: Number.NaN, web: element('web', 'tension', c, tw, webCompressionLimits(epsilon)) };
   }
   const psi = sigma2 / sigma1;
-  const limits = {
-    class1: alpha > 0.5 ? (396 * epsilon) / (13 * alpha - 1) : (36 * epsilon) / alpha,
-    class2: alpha > 0.5 ? (456 * epsilon) / (13 * alpha - 1) : (41.5 * epsilon) / alpha,
-    class3: psi > -1 ? (42 * epsilon) / (0.67 + 0.33 * psi) : 62 * epsilon * (1 - psi) * Math.sqrt(-psi),
-  };
-  return { alpha, psi, web: element('web', 'bending and compression', c, tw, limits) };
+  return { alpha, psi, web: element('web', 'bending and compression', c, tw, internalPartLimits(epsilon, alpha, psi)) };
 }
 
 /** EN 1993-1-1 Table 5.2 sheet 1, internal part in compression: 33 / 38 / 42 eps. */
@@ -247,12 +251,7 @@ function boxWebUnderForces(
     return { alpha, psi: Number.NaN, web: element('web', 'tension', c, tw, webCompressionLimits(epsilon)) };
   }
   const psi = sigma2 / sigma1;
-  const limits = {
-    class1: alpha > 0.5 ? (396 * epsilon) / (13 * alpha - 1) : (36 * epsilon) / alpha,
-    class2: alpha > 0.5 ? (456 * epsilon) / (13 * alpha - 1) : (41.5 * epsilon) / alpha,
-    class3: psi > -1 ? (42 * epsilon) / (0.67 + 0.33 * psi) : 62 * epsilon * (1 - psi) * Math.sqrt(-psi),
-  };
-  return { alpha, psi, web: element('web', 'bending and compression', c, tw, limits) };
+  return { alpha, psi, web: element('web', 'bending and compression', c, tw, internalPartLimits(epsilon, alpha, psi)) };
 }
 
 /**
